@@ -1,0 +1,18 @@
+import type { Logger } from 'pino';
+import type { Mailer } from './adapters/mail';
+import type { Storage } from './adapters/storage';
+import type { Config } from './config';
+import type { Db } from './db/kysely';
+import type { JobQueue } from './jobs/queue';
+import type { Outbox } from './services/outbox';
+
+/** Everything the app talks to, injected so tests can build the app in-process. */
+export interface AppDeps {
+  config: Config;
+  db: Db;
+  storage: Storage;
+  mailer: Mailer;
+  queue: JobQueue;
+  outbox: Outbox;
+  logger: Logger;
+}

@@ -1,0 +1,56 @@
+import path from 'node:path';
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import type { AppDeps } from './app-deps';
+import { apiNotFound, errorHandler } from './http/error-handler';
+import { buildApiRouter } from './http/registry';
+import { routeRegistry } from './routes';
+import { createPageRenderer, distPaths } from './ssr/page-renderer';
+
+/** Builds the Express app from its dependencies; listening is the caller's business. */
+export function createApp(deps: AppDeps): Express {
+  const { config } = deps;
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: true,
+        directives: {
+          'default-src': ["'self'"],
+          // No inline script anywhere: hydration data travels as JSON in a non-executable tag.
+          'script-src': ["'self'"],
+          'style-src': ["'self'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'font-src': ["'self'"],
+          'connect-src': ["'self'"],
+          'form-action': ["'self'"],
+          'frame-ancestors': ["'none'"],
+          'object-src': ["'none'"],
+          // Local HTTP on loopback must not be upgraded to HTTPS.
+          'upgrade-insecure-requests': config.NODE_ENV === 'production' && config.PUBLIC_URL.startsWith('https:') ? [] : null,
+        },
+      },
+      strictTransportSecurity: config.PUBLIC_URL.startsWith('https:'),
+    }),
+  );
+  app.use(pinoHttp({ logger: deps.logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+
+  const api = express.Router();
+  api.use(express.json({ limit: '1mb' }));
+  api.use(buildApiRouter(routeRegistry, deps));
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  const { client } = distPaths(config.DIST_DIR);
+  // Hashed assets never change under their name: cache them for a year.
+  app.use('/assets', express.static(path.join(client, 'assets'), { immutable: true, maxAge: '365d', index: false, fallthrough: false }));
+  app.use(express.static(client, { index: false, maxAge: config.NODE_ENV === 'production' ? '1h' : 0 }));
+  app.get('/{*splat}', createPageRenderer(config.DIST_DIR));
+
+  app.use(errorHandler);
+  return app;
+}

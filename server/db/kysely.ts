@@ -1,0 +1,34 @@
+import { Kysely, PostgresDialect } from 'kysely';
+import pg from 'pg';
+import type { Database } from './database';
+
+// int8 (bigint, count(*)) → number, refusing silently lossy values; numeric stays a string
+// so decimal quantities and rates are parsed deliberately, never as floats by accident.
+pg.types.setTypeParser(pg.types.builtins.INT8, (v: string) => {
+  const n = Number(v);
+  if (!Number.isSafeInteger(n)) throw new RangeError(`bigint ${v} is outside the safe integer range`);
+  return n;
+});
+
+export type Db = Kysely<Database>;
+
+export interface DbHandle {
+  db: Db;
+  pool: pg.Pool;
+  destroy(): Promise<void>;
+}
+
+/** Opens a pool and a Kysely instance over it; errors on idle clients are logged, not fatal. */
+export function createDb(connectionString: string, opts: { max?: number; onError?: (err: Error) => void } = {}): DbHandle {
+  const pool = new pg.Pool({
+    connectionString,
+    max: opts.max ?? 10,
+    connectionTimeoutMillis: 5_000,
+    idleTimeoutMillis: 30_000,
+    // Fail fast when the database is gone instead of hanging a request.
+    query_timeout: 30_000,
+  });
+  pool.on('error', (err) => opts.onError?.(err));
+  const db = new Kysely<Database>({ dialect: new PostgresDialect({ pool }) });
+  return { db, pool, destroy: () => db.destroy() };
+}

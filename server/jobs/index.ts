@@ -1,0 +1,6 @@
+import type { AppDeps } from '../app-deps';
+
+/** Every feature registers its jobs here, once, before the queue starts. */
+export function registerJobs(deps: AppDeps): void {
+  deps.outbox.register();
+}

@@ -1,0 +1,19 @@
+import type { EpisodeListItem } from '../../src/shared/schemas/episodes';
+import type { listLatestEpisodes } from '../db/episodes.queries';
+
+type LatestRow = Awaited<ReturnType<typeof listLatestEpisodes>>['rows'][number];
+
+/** Maps a joined episode row to the API's list item. */
+export function presentEpisodeListItem(row: LatestRow): EpisodeListItem {
+  return {
+    id: row.id,
+    number: row.number,
+    slug: row.slug,
+    title: row.title,
+    summary: row.summary,
+    publishedAt: (row.published_at ?? new Date(0)).toISOString(),
+    coverUrl: null,
+    build: { id: row.build_id, slug: row.build_slug, title: row.build_title },
+    creator: { handle: row.handle, displayName: row.display_name },
+  };
+}

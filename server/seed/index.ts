@@ -1,0 +1,24 @@
+import { sql } from 'kysely';
+import type { Db } from '../db/kysely';
+import type { SeedSection } from './section';
+import { demoAccountsSection } from './sections/demo-accounts';
+
+/** Every demo-seed section, in the order they run (later sections may use earlier ones' rows). */
+export const seedSections: readonly SeedSection[] = [demoAccountsSection];
+
+/** Runs every section in its own transaction; safe to run on every start. */
+export async function runSeed(db: Db, sections: readonly SeedSection[] = seedSections): Promise<string[]> {
+  const ran: string[] = [];
+  for (const section of sections) {
+    await db.transaction().execute(async (trx) => {
+      await section.run(trx);
+      await trx
+        .insertInto('seed_runs')
+        .values({ section: section.key, version: section.version })
+        .onConflict((oc) => oc.column('section').doUpdateSet({ version: section.version, ran_at: sql`now()` }))
+        .execute();
+    });
+    ran.push(section.key);
+  }
+  return ran;
+}

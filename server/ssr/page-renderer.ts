@@ -1,0 +1,75 @@
+import { promises as fs } from 'node:fs';
+import path from 'node:path';
+import { pathToFileURL } from 'node:url';
+import type { Request as ExpressRequest, RequestHandler } from 'express';
+import type { RenderInput, RenderResult } from '../../src/entry-server';
+import { HYDRATION_SCRIPT_ID } from '../../src/app/hydration-data';
+
+interface Bundle {
+  template: string;
+  render: (input: RenderInput) => Promise<RenderResult>;
+}
+
+/** Where the built client (index.html, assets) and the server-rendering entry live. */
+export function distPaths(distDir: string) {
+  const root = path.resolve(distDir);
+  return { client: path.join(root, 'client'), entry: path.join(root, 'server', 'entry-server.js') };
+}
+
+/** The loopback address of the socket this request came in on: the server reaching itself. */
+function selfBaseUrl(req: ExpressRequest): string {
+  const { localAddress, localPort } = req.socket;
+  const host = !localAddress || localAddress === '::' ? '127.0.0.1' : localAddress.replace(/^::ffff:/, '');
+  return `http://${host.includes(':') ? `[${host}]` : host}:${localPort}`;
+}
+
+function toWebRequest(req: ExpressRequest): Request {
+  const url = new URL(req.originalUrl, `http://${req.headers.host ?? 'localhost'}`);
+  const headers = new Headers();
+  for (const [k, v] of Object.entries(req.headers)) if (typeof v === 'string') headers.set(k, v);
+  return new Request(url, { method: 'GET', headers });
+}
+
+/**
+ * Server rendering for every page route: runs the route's loaders, renders React to HTML and
+ * embeds hydration data as JSON (no inline script, so the CSP forbids all inline scripts).
+ */
+export function createPageRenderer(distDir: string): RequestHandler {
+  const paths = distPaths(distDir);
+  let bundle: Promise<Bundle> | undefined;
+  const load = (): Promise<Bundle> =>
+    (bundle ??= (async () => {
+      const template = await fs.readFile(path.join(paths.client, 'index.html'), 'utf8');
+      const mod = (await import(pathToFileURL(paths.entry).href)) as { render: Bundle['render'] };
+      return { template, render: mod.render };
+    })().catch((err: unknown) => {
+      bundle = undefined;
+      throw err;
+    }));
+
+  return async (req, res) => {
+    let loaded: Bundle;
+    try {
+      loaded = await load();
+    } catch (err) {
+      req.log?.error({ err }, 'client bundle missing; run `npm run build`');
+      res.status(503).type('text/plain').send('The client has not been built yet. Run `npm run build` (npm start does it for you).');
+      return;
+    }
+    const result = await loaded.render({ request: toWebRequest(req), apiBaseUrl: selfBaseUrl(req), cookie: req.headers.cookie });
+    if (result.type === 'response') {
+      const location = result.response.headers.get('location');
+      if (location && result.response.status >= 300 && result.response.status < 400) {
+        res.redirect(result.response.status, location);
+        return;
+      }
+      res.status(result.response.status).type('text/plain').send(await result.response.text());
+      return;
+    }
+    const html = loaded.template
+      .replace('<!--app-head-->', result.head)
+      .replace('<!--app-html-->', () => result.html)
+      .replace('<!--app-data-->', () => `<script type="application/json" id="${HYDRATION_SCRIPT_ID}">${result.data}</script>`);
+    res.status(result.status).setHeader('cache-control', 'no-store').type('html').send(html);
+  };
+}

@@ -1,0 +1,15 @@
+import { QueryClient } from '@tanstack/react-query';
+import { ApiError } from './api-client';
+
+/** One QueryClient per browser session, and a fresh one per server render. */
+export function createQueryClient(): QueryClient {
+  return new QueryClient({
+    defaultOptions: {
+      queries: {
+        // Server-rendered data is fresh on arrival; do not refetch it during hydration.
+        staleTime: 30_000,
+        retry: (failures, error) => !(error instanceof ApiError && error.status < 500) && failures < 2,
+      },
+    },
+  });
+}

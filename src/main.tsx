@@ -1,0 +1,41 @@
+import { hydrate } from '@tanstack/react-query';
+import { StrictMode } from 'react';
+import { createRoot, hydrateRoot } from 'react-dom/client';
+import { createBrowserRouter, RouterProvider } from 'react-router';
+import { HYDRATION_SCRIPT_ID, type HydrationPayload } from './app/hydration-data';
+import { Providers } from './app/providers';
+import { createRoutes } from './app/routes';
+import { createApiClient } from './lib/api-client';
+import { createQueryClient } from './lib/query-client';
+import './styles.css';
+
+declare global {
+  interface Window {
+    __staticRouterHydrationData?: HydrationPayload['router'];
+  }
+}
+
+const queryClient = createQueryClient();
+const api = createApiClient();
+const payloadText = document.getElementById(HYDRATION_SCRIPT_ID)?.textContent;
+const payload = payloadText ? (JSON.parse(payloadText) as HydrationPayload) : null;
+if (payload) {
+  hydrate(queryClient, payload.query);
+  // React Router reads this (and revives route errors) when the browser router is created.
+  window.__staticRouterHydrationData = payload.router;
+}
+
+const router = createBrowserRouter(createRoutes({ queryClient, api }));
+const container = document.getElementById('root');
+if (!container) throw new Error('#root is missing from index.html');
+
+const app = (
+  <StrictMode>
+    <Providers queryClient={queryClient} api={api}>
+      <RouterProvider router={router} />
+    </Providers>
+  </StrictMode>
+);
+
+if (payload) hydrateRoot(container, app);
+else createRoot(container).render(app);

@@ -1,0 +1,41 @@
+import { defineConfig, mergeConfig } from 'vitest/config';
+import viteConfig from './vite.config';
+
+export default mergeConfig(
+  viteConfig,
+  defineConfig({
+    test: {
+      setupFiles: ['tests/setup/console-guard.ts'],
+      env: { AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true' },
+      projects: [
+        {
+          extends: true,
+          test: { name: 'unit', include: ['src/**/*.test.{ts,tsx}', 'tests/unit/**/*.test.{ts,tsx}'], environment: 'node' },
+        },
+        {
+          extends: true,
+          test: {
+            name: 'api',
+            include: ['tests/api/**/*.test.ts'],
+            globalSetup: ['tests/setup/db-global.ts'],
+            testTimeout: 20_000,
+            hookTimeout: 60_000,
+            // Two cores: one worker per core, one database per test file.
+            maxWorkers: 2,
+          },
+        },
+        {
+          extends: true,
+          test: {
+            name: 'e2e',
+            include: ['tests/e2e/**/*.test.ts'],
+            globalSetup: ['tests/setup/db-global.ts', 'tests/setup/build-global.ts'],
+            testTimeout: 60_000,
+            hookTimeout: 120_000,
+            fileParallelism: false,
+          },
+        },
+      ],
+    },
+  }),
+);
