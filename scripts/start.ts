@@ -6,6 +6,7 @@ import { fileURLToPath } from 'node:url';
 import { startAllFakes } from '../fakes/all';
 import { ensureBuilt } from './lib/build';
 import { ensureDatabase, startCluster } from './lib/postgres';
+import { watchParent } from './lib/watch-parent';
 import { migrateDatabase } from './migrate';
 import { seedDatabase } from './seed';
 
@@ -40,6 +41,7 @@ async function stopAll(code: number): Promise<never> {
 
 async function main() {
   for (const sig of ['SIGINT', 'SIGTERM', 'SIGHUP'] as const) process.on(sig, () => void stopAll(0));
+  watchParent(() => void stopAll(1));
 
   const cluster = await startCluster(root, 'dev', Number(env.RR_PG_PORT ?? 54320), { durable: true });
   cleanups.push(() => cluster.stop());

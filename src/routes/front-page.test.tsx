@@ -2,7 +2,7 @@
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { cleanup, render, screen, within } from '@testing-library/react';
 import { createMemoryRouter, RouterProvider } from 'react-router';
-import { afterEach, describe, expect, it, vi } from 'vitest';
+import { afterEach, describe, expect, it } from 'vitest';
 import { createApiClient } from '../lib/api-client';
 import { ApiProvider } from '../lib/api-context';
 import type { EpisodeListItem, LatestEpisodesResponse } from '../shared/schemas/episodes';
