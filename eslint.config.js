@@ -58,7 +58,11 @@ export default tseslint.config(
         {
           default: 'allow',
           policies: [
-            { from: el('shared'), disallow: to('lib', 'ui', 'feature', 'app', 'server', 'migration', 'tooling'), message: 'src/shared imports nothing of the app' },
+            {
+              from: el('shared'),
+              disallow: to('lib', 'ui', 'feature', 'app', 'server', 'migration', 'tooling'),
+              message: 'src/shared imports nothing of the app',
+            },
             { from: el('lib', 'ui'), disallow: to('feature', 'app', 'server', 'migration', 'tooling') },
             { from: el('feature'), disallow: to('app', 'server', 'migration', 'tooling') },
             {
@@ -66,8 +70,16 @@ export default tseslint.config(
               disallow: { to: { element: { type: 'feature', captured: { featureName: '!{{ from.element.captured.featureName }}' } } } },
               message: 'features do not import each other; compose them in a route',
             },
-            { from: el('server'), disallow: to('lib', 'ui', 'feature', 'migration', 'tooling'), message: 'server/ takes only src/shared (and the SSR entry) from the client' },
-            { from: el('migration'), disallow: to('shared', 'lib', 'ui', 'feature', 'app', 'server', 'tooling'), message: 'migrations never import app code' },
+            {
+              from: el('server'),
+              disallow: to('lib', 'ui', 'feature', 'migration', 'tooling'),
+              message: 'server/ takes only src/shared (and the SSR entry) from the client',
+            },
+            {
+              from: el('migration'),
+              disallow: to('shared', 'lib', 'ui', 'feature', 'app', 'server', 'tooling'),
+              message: 'migrations never import app code',
+            },
           ],
         },
       ],

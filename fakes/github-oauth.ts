@@ -17,8 +17,16 @@ type Account = { id: number; login: string; name: string; email: string; role?: 
 type Grant = { account: Account; clientId: string; redirectUri: string; scope: string; challenge?: string; method?: string };
 
 const AccountsFile = z.object({
-  accounts: z.array(z.object({ githubId: z.number().int(), login: z.string(), name: z.string(), email: z.string(),
-    role: z.string().optional(), bio: z.string().optional() })),
+  accounts: z.array(
+    z.object({
+      githubId: z.number().int(),
+      login: z.string(),
+      name: z.string(),
+      email: z.string(),
+      role: z.string().optional(),
+      bio: z.string().optional(),
+    }),
+  ),
 });
 const NewAccount = z.object({
   new_login: z.string().regex(/^[a-z0-9](?:[a-z0-9]|-(?=[a-z0-9])){0,38}$/i, 'login: letters, digits, single hyphens'),
@@ -32,8 +40,9 @@ const FLOW_FIELDS = ['client_id', 'redirect_uri', 'state', 'scope', 'code_challe
 /** Starts the fake GitHub OAuth provider (authorize, access_token, /user, /user/emails, avatars). */
 export async function startGithubOAuthFake(opts: GithubOAuthFakeOptions = {}): Promise<GithubOAuthFake> {
   const host = opts.host ?? '127.0.0.1';
-  const demo = AccountsFile.parse(JSON.parse(readFileSync(opts.accountsFile ?? DEFAULT_ACCOUNTS, 'utf8'))).accounts
-    .map(({ githubId, ...rest }): Account => ({ id: githubId, ...rest }));
+  const demo = AccountsFile.parse(JSON.parse(readFileSync(opts.accountsFile ?? DEFAULT_ACCOUNTS, 'utf8'))).accounts.map(
+    ({ githubId, ...rest }): Account => ({ id: githubId, ...rest }),
+  );
   const madeUp = new Map<string, Account>();
   const codes = new Map<string, Grant & { expiresAt: number }>();
   const tokens = new Map<string, Grant>();
@@ -50,8 +59,15 @@ export async function startGithubOAuthFake(opts: GithubOAuthFakeOptions = {}): P
     const code = randomBytes(10).toString('hex');
     const now = Date.now();
     for (const [key, grant] of codes) if (grant.expiresAt < now) codes.delete(key);
-    codes.set(code, { account, clientId: flow.client_id ?? '', redirectUri: target.href, scope: normaliseScope(flow.scope),
-      challenge: flow.code_challenge, method: flow.code_challenge_method, expiresAt: now + CODE_TTL_MS });
+    codes.set(code, {
+      account,
+      clientId: flow.client_id ?? '',
+      redirectUri: target.href,
+      scope: normaliseScope(flow.scope),
+      challenge: flow.code_challenge,
+      method: flow.code_challenge_method,
+      expiresAt: now + CODE_TTL_MS,
+    });
     target.searchParams.set('code', code);
     if (flow.state !== undefined) target.searchParams.set('state', flow.state);
     res.redirect(302, target.href);
@@ -79,7 +95,11 @@ export async function startGithubOAuthFake(opts: GithubOAuthFakeOptions = {}): P
       return redirectWithCode(res, flow, account);
     }
     const parsed = NewAccount.safeParse(body);
-    if (!parsed.success) return void res.status(400).type('text').send(parsed.error.issues.map((i) => i.message).join('\n'));
+    if (!parsed.success)
+      return void res
+        .status(400)
+        .type('text')
+        .send(parsed.error.issues.map((i) => i.message).join('\n'));
     const { new_login: login, new_name: name, new_email: email } = parsed.data;
     if (demo.some((a) => a.login.toLowerCase() === login.toLowerCase())) {
       return void res.status(400).type('text').send(`"${login}" is a demo account: pick it from the list instead.`);
@@ -98,12 +118,12 @@ export async function startGithubOAuthFake(opts: GithubOAuthFakeOptions = {}): P
     let error: string | null = null;
     if (!grant || grant.expiresAt < Date.now()) error = 'bad_verification_code';
     else if (field('client_id') !== grant.clientId || !field('client_secret')) error = 'incorrect_client_credentials';
-    else if (field('redirect_uri') !== undefined && !sameUri(field('redirect_uri') ?? '', grant.redirectUri)) error = 'redirect_uri_mismatch';
+    else if (field('redirect_uri') !== undefined && !sameUri(field('redirect_uri') ?? '', grant.redirectUri))
+      error = 'redirect_uri_mismatch';
     else if (grant.challenge && !pkceMatches(grant.challenge, grant.method, field('code_verifier'))) error = 'bad_verification_code';
     // GitHub answers 200 even for errors, in JSON only when asked for it.
-    const answer: Record<string, string> = error || !grant
-      ? { error: error ?? 'bad_verification_code', error_description: errorText(error) }
-      : issueToken(grant);
+    const answer: Record<string, string> =
+      error || !grant ? { error: error ?? 'bad_verification_code', error_description: errorText(error) } : issueToken(grant);
     if ((req.get('accept') ?? '').includes('application/json')) return void res.json(answer);
     res.type('application/x-www-form-urlencoded').send(new URLSearchParams(answer).toString());
   });
@@ -125,9 +145,17 @@ export async function startGithubOAuthFake(opts: GithubOAuthFakeOptions = {}): P
     const grant = authorised(req, res);
     if (!grant) return;
     const a = findAccount(grant.account.login) ?? grant.account;
-    res.json({ id: a.id, node_id: Buffer.from(`User${a.id}`).toString('base64'), login: a.login, name: a.name,
-      email: a.email, bio: a.bio ?? null, type: 'User', avatar_url: `${baseUrl}/avatars/${encodeURIComponent(a.login)}.svg`,
-      html_url: `${baseUrl}/people/${encodeURIComponent(a.login)}` });
+    res.json({
+      id: a.id,
+      node_id: Buffer.from(`User${a.id}`).toString('base64'),
+      login: a.login,
+      name: a.name,
+      email: a.email,
+      bio: a.bio ?? null,
+      type: 'User',
+      avatar_url: `${baseUrl}/avatars/${encodeURIComponent(a.login)}.svg`,
+      html_url: `${baseUrl}/people/${encodeURIComponent(a.login)}`,
+    });
   });
   app.get('/user/emails', (req, res) => {
     const grant = authorised(req, res);
@@ -145,7 +173,11 @@ export async function startGithubOAuthFake(opts: GithubOAuthFakeOptions = {}): P
   app.get('/people/:login', (req, res) => {
     const a = findAccount(req.params.login);
     if (!a) return void res.status(404).type('text').send('Not Found');
-    res.type('html').send(`<!doctype html><meta charset="utf-8"><title>${esc(a.login)}</title><img src="/avatars/${esc(encodeURIComponent(a.login))}.svg" width="64" alt=""><h1>${esc(a.name)}</h1><p>@${esc(a.login)}</p><p>${esc(a.bio ?? '')}</p>`);
+    res
+      .type('html')
+      .send(
+        `<!doctype html><meta charset="utf-8"><title>${esc(a.login)}</title><img src="/avatars/${esc(encodeURIComponent(a.login))}.svg" width="64" alt=""><h1>${esc(a.name)}</h1><p>@${esc(a.login)}</p><p>${esc(a.bio ?? '')}</p>`,
+      );
   });
 
   const server = await new Promise<Server>((resolve, reject) => {
@@ -194,7 +226,10 @@ function flowProblem(flow: Record<string, string | undefined>): string | null {
 
 // GitHub accepts space- or comma-separated scopes and reports them comma-separated.
 function normaliseScope(scope: string | undefined): string {
-  return (scope ?? '').split(/[\s,]+/).filter(Boolean).join(',');
+  return (scope ?? '')
+    .split(/[\s,]+/)
+    .filter(Boolean)
+    .join(',');
 }
 
 function sameUri(a: string, b: string): boolean {
@@ -223,17 +258,31 @@ function stableId(login: string): number {
 }
 
 function avatarSvg(login: string, name: string): string {
-  const initials = name.split(/[\s-]+/).filter(Boolean).slice(0, 2).map((w) => w[0]?.toUpperCase() ?? '').join('') || '?';
+  const initials =
+    name
+      .split(/[\s-]+/)
+      .filter(Boolean)
+      .slice(0, 2)
+      .map((w) => w[0]?.toUpperCase() ?? '')
+      .join('') || '?';
   const hue = parseInt(createHash('sha256').update(login).digest('hex').slice(0, 4), 16) % 360;
-  return `<svg xmlns="http://www.w3.org/2000/svg" width="120" height="120" viewBox="0 0 120 120"><rect width="120" height="120" fill="hsl(${hue} 45% 38%)"/>` +
-    `<text x="60" y="60" dy=".35em" text-anchor="middle" font-family="sans-serif" font-size="48" fill="#fff">${esc(initials)}</text></svg>`;
+  return (
+    `<svg xmlns="http://www.w3.org/2000/svg" width="120" height="120" viewBox="0 0 120 120"><rect width="120" height="120" fill="hsl(${hue} 45% 38%)"/>` +
+    `<text x="60" y="60" dy=".35em" text-anchor="middle" font-family="sans-serif" font-size="48" fill="#fff">${esc(initials)}</text></svg>`
+  );
 }
 
 function renderPicker(accounts: Account[], flow: Record<string, string | undefined>, baseUrl: string): string {
   const hidden = FLOW_FIELDS.filter((k) => flow[k] !== undefined)
-    .map((k) => `<input type="hidden" name="${k}" value="${esc(flow[k] ?? '')}">`).join('');
-  const choices = accounts.map((a) => `<li><button name="login" value="${esc(a.login)}"><img src="${baseUrl}/avatars/${esc(encodeURIComponent(a.login))}.svg" width="40" height="40" alt="">` +
-    `<span><strong>${esc(a.name)}</strong> @${esc(a.login)}${a.role ? ` · ${esc(a.role)}` : ''}<br><small>${esc(a.bio ?? '')}</small></span></button></li>`).join('');
+    .map((k) => `<input type="hidden" name="${k}" value="${esc(flow[k] ?? '')}">`)
+    .join('');
+  const choices = accounts
+    .map(
+      (a) =>
+        `<li><button name="login" value="${esc(a.login)}"><img src="${baseUrl}/avatars/${esc(encodeURIComponent(a.login))}.svg" width="40" height="40" alt="">` +
+        `<span><strong>${esc(a.name)}</strong> @${esc(a.login)}${a.role ? ` · ${esc(a.role)}` : ''}<br><small>${esc(a.bio ?? '')}</small></span></button></li>`,
+    )
+    .join('');
   return `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width,initial-scale=1"><title>Sign in (fake GitHub)</title>
 <style>body{font:15px/1.5 system-ui,sans-serif;background:#f4f1ea;color:#1d1d1b;margin:0}main{max-width:36rem;margin:2rem auto;padding:0 1rem}
 ul{list-style:none;padding:0}li{margin:.4rem 0}button{display:flex;gap:.75rem;align-items:center;width:100%;text-align:left;padding:.6rem;border:1px solid #cfc6b4;background:#fff;border-radius:6px;cursor:pointer;font:inherit}

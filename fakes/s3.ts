@@ -30,9 +30,7 @@ export async function startS3Fake(opts: S3FakeOptions): Promise<S3Fake> {
       stopped = true;
       // Keep-alive sockets from the AWS SDK would otherwise hold close() open for seconds.
       httpServer.closeAllConnections();
-      await new Promise<void>((resolve, reject) =>
-        httpServer.close((err) => (err ? reject(err) : resolve())),
-      );
+      await new Promise<void>((resolve, reject) => httpServer.close((err) => (err ? reject(err) : resolve())));
     },
   };
 }

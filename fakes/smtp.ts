@@ -35,8 +35,21 @@ export type SmtpFake = {
 };
 
 // Headers worth seeing when checking a mail; the rest stay in the (not kept) raw message.
-const KEPT_HEADERS = ['from', 'to', 'cc', 'reply-to', 'date', 'message-id', 'in-reply-to', 'references',
-  'list-unsubscribe', 'list-unsubscribe-post', 'list-id', 'auto-submitted', 'content-type'];
+const KEPT_HEADERS = [
+  'from',
+  'to',
+  'cc',
+  'reply-to',
+  'date',
+  'message-id',
+  'in-reply-to',
+  'references',
+  'list-unsubscribe',
+  'list-unsubscribe-post',
+  'list-id',
+  'auto-submitted',
+  'content-type',
+];
 const MAX_SIZE = 25 * 1024 * 1024;
 
 /** Starts the SMTP listener and its HTTP inbox; both on loopback, ports 0 allowed. */
@@ -184,7 +197,10 @@ function keptHeaders(lines: ReadonlyArray<{ key: string; line: string }>): Recor
   const kept: Record<string, string> = {};
   for (const { key, line } of lines) {
     if (!KEPT_HEADERS.includes(key)) continue;
-    const value = line.slice(line.indexOf(':') + 1).replace(/\r?\n[ \t]+/g, ' ').trim();
+    const value = line
+      .slice(line.indexOf(':') + 1)
+      .replace(/\r?\n[ \t]+/g, ' ')
+      .trim();
     kept[key] = kept[key] ? `${kept[key]}, ${value}` : value;
   }
   return kept;
@@ -203,13 +219,18 @@ th,td{text-align:left;padding:.5rem .75rem;border-bottom:1px solid #ddd6c8;verti
 a{color:#7a2e0e}pre{white-space:pre-wrap;background:#fff;padding:1rem;border:1px solid #ddd6c8}dt{font-weight:600}dd{margin:0 0 .5rem}`;
 
 function page(title: string, body: string): string {
-  return `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>${escapeHtml(title)}</title>` +
-    `<meta name="viewport" content="width=device-width,initial-scale=1"><style>${PAGE_STYLE}</style></head><body><main>${body}</main></body></html>`;
+  return (
+    `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>${escapeHtml(title)}</title>` +
+    `<meta name="viewport" content="width=device-width,initial-scale=1"><style>${PAGE_STYLE}</style></head><body><main>${body}</main></body></html>`
+  );
 }
 
 function renderInbox(messages: CapturedMessage[]): string {
-  const rows = messages.map((m) => `<tr><td><a href="/messages/${m.id}">${escapeHtml(m.subject || '(no subject)')}</a></td>` +
-    `<td>${escapeHtml(m.to.join(', '))}</td><td><time datetime="${escapeHtml(m.date)}">${escapeHtml(m.date.replace('T', ' ').slice(0, 19))}</time></td></tr>`);
+  const rows = messages.map(
+    (m) =>
+      `<tr><td><a href="/messages/${m.id}">${escapeHtml(m.subject || '(no subject)')}</a></td>` +
+      `<td>${escapeHtml(m.to.join(', '))}</td><td><time datetime="${escapeHtml(m.date)}">${escapeHtml(m.date.replace('T', ' ').slice(0, 19))}</time></td></tr>`,
+  );
   const table = rows.length
     ? `<table><thead><tr><th scope="col">Subject</th><th scope="col">To</th><th scope="col">Date (UTC)</th></tr></thead><tbody>${rows.join('')}</tbody></table>`
     : '<p>No messages yet. Mail sent to this fake shows up here.</p>';
@@ -217,12 +238,21 @@ function renderInbox(messages: CapturedMessage[]): string {
 }
 
 function renderMessage(m: CapturedMessage): string {
-  const meta = [['From', m.from ?? ''], ['To', m.to.join(', ')], ['Date', m.date], ['Message-ID', m.messageId ?? '']]
-    .map(([k, v]) => `<dt>${escapeHtml(k ?? '')}</dt><dd>${escapeHtml(v ?? '')}</dd>`).join('');
+  const meta = [
+    ['From', m.from ?? ''],
+    ['To', m.to.join(', ')],
+    ['Date', m.date],
+    ['Message-ID', m.messageId ?? ''],
+  ]
+    .map(([k, v]) => `<dt>${escapeHtml(k ?? '')}</dt><dd>${escapeHtml(v ?? '')}</dd>`)
+    .join('');
   // The HTML part is shown as source, never rendered: it could load remote content.
   const html = m.html ? `<details><summary>HTML part (source)</summary><pre>${escapeHtml(m.html)}</pre></details>` : '';
-  return page(m.subject || 'Message', `<p><a href="/">&larr; Inbox</a></p><h1>${escapeHtml(m.subject || '(no subject)')}</h1>` +
-    `<dl>${meta}</dl><pre>${escapeHtml(m.text || '(no text part)')}</pre>${html}`);
+  return page(
+    m.subject || 'Message',
+    `<p><a href="/">&larr; Inbox</a></p><h1>${escapeHtml(m.subject || '(no subject)')}</h1>` +
+      `<dl>${meta}</dl><pre>${escapeHtml(m.text || '(no text part)')}</pre>${html}`,
+  );
 }
 
 function escapeHtml(value: string): string {

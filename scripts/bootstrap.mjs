@@ -37,7 +37,9 @@ function ensureNodeModules() {
 let aptUpdated = false;
 function aptInstall(packages) {
   if (!isRoot) {
-    console.error(`[rivet-reel] missing system packages: ${packages.join(' ')}. Install them (apt-get install -y ${packages.join(' ')}) or run as root.`);
+    console.error(
+      `[rivet-reel] missing system packages: ${packages.join(' ')}. Install them (apt-get install -y ${packages.join(' ')}) or run as root.`,
+    );
     process.exit(1);
   }
   const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };

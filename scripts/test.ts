@@ -51,12 +51,19 @@ async function vitest(project: string, env: NodeJS.ProcessEnv): Promise<StepResu
   const out = path.join(resultsDir, `${project}.json`);
   rmSync(out, { force: true });
   log(`${project} tests…`);
-  const code = await run(bin('vitest'), ['run', '--project', project, '--reporter=default', '--reporter=json', `--outputFile.json=${out}`], env);
+  const code = await run(
+    bin('vitest'),
+    ['run', '--project', project, '--reporter=default', '--reporter=json', `--outputFile.json=${out}`],
+    env,
+  );
   const seconds = (Date.now() - started) / 1000;
   if (!existsSync(out)) return { name: `${project} tests`, passed: 0, failed: 1, skipped: 0, seconds };
   const r = JSON.parse(readFileSync(out, 'utf8')) as VitestJson;
   // A suite that failed to load has no failed test of its own: count it, so it cannot pass silently.
-  const failed = r.numFailedTests + (r.numFailedTestSuites > 0 && r.numFailedTests === 0 ? r.numFailedTestSuites : 0) + (code !== 0 && r.success ? 1 : 0);
+  const failed =
+    r.numFailedTests +
+    (r.numFailedTestSuites > 0 && r.numFailedTests === 0 ? r.numFailedTestSuites : 0) +
+    (code !== 0 && r.success ? 1 : 0);
   return { name: `${project} tests`, passed: r.numPassedTests, failed, skipped: r.numPendingTests + r.numTodoTests, seconds };
 }
 
@@ -77,16 +84,27 @@ async function main() {
   }
   try {
     log(`PostgreSQL for tests on 127.0.0.1:${cluster.port}`);
-    const env = { ...process.env, TEST_PG_ADMIN_URL: cluster.url('postgres'), AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true', FORCE_COLOR: process.env.CI ? '0' : process.env.FORCE_COLOR };
+    const env = {
+      ...process.env,
+      TEST_PG_ADMIN_URL: cluster.url('postgres'),
+      AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true',
+      FORCE_COLOR: process.env.CI ? '0' : process.env.FORCE_COLOR,
+    };
     const results: StepResult[] = [];
     results.push(await check('typecheck', bin('tsc'), ['--noEmit'], env));
     results.push(await check('lint', bin('eslint'), ['.', '--max-warnings=0'], env));
     for (const project of ['unit', 'api', 'e2e']) results.push(await vitest(project, env));
 
-    const total = results.reduce((a, r) => ({ passed: a.passed + r.passed, failed: a.failed + r.failed, skipped: a.skipped + r.skipped }), { passed: 0, failed: 0, skipped: 0 });
+    const total = results.reduce((a, r) => ({ passed: a.passed + r.passed, failed: a.failed + r.failed, skipped: a.skipped + r.skipped }), {
+      passed: 0,
+      failed: 0,
+      skipped: 0,
+    });
     console.log('\nSummary');
     for (const r of results) {
-      console.log(`  ${r.failed ? 'FAIL' : 'ok  '}  ${r.name.padEnd(12)} ${String(r.passed).padStart(4)} passed  ${String(r.failed).padStart(3)} failed  ${String(r.skipped).padStart(3)} skipped  ${r.seconds.toFixed(1)} s`);
+      console.log(
+        `  ${r.failed ? 'FAIL' : 'ok  '}  ${r.name.padEnd(12)} ${String(r.passed).padStart(4)} passed  ${String(r.failed).padStart(3)} failed  ${String(r.skipped).padStart(3)} skipped  ${r.seconds.toFixed(1)} s`,
+      );
     }
     console.log(`${total.passed} passed, ${total.failed} failed${total.skipped ? `, ${total.skipped} skipped` : ''}`);
     exitCode = total.failed === 0 ? 0 : 1;

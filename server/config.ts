@@ -1,8 +1,6 @@
 import { z } from 'zod';
 
-const bool = z
-  .enum(['true', 'false', '1', '0', 'yes', 'no'])
-  .transform((v) => v === 'true' || v === '1' || v === 'yes');
+const bool = z.enum(['true', 'false', '1', '0', 'yes', 'no']).transform((v) => v === 'true' || v === '1' || v === 'yes');
 
 const port = z.coerce.number().int().min(0).max(65_535);
 
@@ -20,7 +18,10 @@ const schema = z
     SESSION_SECRET: z.string().min(32, 'must be at least 32 characters').default(DEV_SESSION_SECRET),
     S3_ENDPOINT: z.url().optional(),
     S3_REGION: z.string().min(1).default('us-east-1'),
-    S3_BUCKET: z.string().regex(/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/, 'must be a valid S3 bucket name').default('rivet-reel-media'),
+    S3_BUCKET: z
+      .string()
+      .regex(/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/, 'must be a valid S3 bucket name')
+      .default('rivet-reel-media'),
     S3_ACCESS_KEY_ID: z.string().min(1).default('S3RVER'),
     S3_SECRET_ACCESS_KEY: z.string().min(1).default('S3RVER'),
     S3_FORCE_PATH_STYLE: bool.optional(),
@@ -60,9 +61,7 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
   const cleaned = Object.fromEntries(Object.entries(env).filter(([, v]) => v !== undefined && v !== ''));
   const result = schema.safeParse(cleaned);
   if (!result.success) {
-    throw new ConfigError(
-      result.error.issues.map((i) => `${i.path.join('.') || '(root)'}: ${i.message}`),
-    );
+    throw new ConfigError(result.error.issues.map((i) => `${i.path.join('.') || '(root)'}: ${i.message}`));
   }
   const c = result.data;
   // A custom endpoint (s3rver, MinIO) needs path-style addressing; real S3 does not.

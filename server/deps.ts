@@ -15,7 +15,10 @@ export interface RunningDeps extends AppDeps {
 
 /** Opens the real dependencies from config (the queue is created but not started). */
 export function createDeps(config: Config, logger: Logger, overrides: { outbox?: Partial<OutboxOptions> } = {}): RunningDeps {
-  const { db, destroy } = createDb(config.DATABASE_URL, { max: config.DATABASE_POOL_MAX, onError: (err) => logger.warn({ err }, 'idle database client error') });
+  const { db, destroy } = createDb(config.DATABASE_URL, {
+    max: config.DATABASE_POOL_MAX,
+    onError: (err) => logger.warn({ err }, 'idle database client error'),
+  });
   const storage = createS3Storage(config);
   const mailer = createSmtpMailer(config);
   const queue = new JobQueue(config.DATABASE_URL, logger);

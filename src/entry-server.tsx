@@ -17,8 +17,7 @@ export interface RenderInput {
 }
 
 export type RenderResult =
-  | { type: 'response'; response: Response }
-  | { type: 'page'; status: number; head: string; html: string; data: string };
+  { type: 'response'; response: Response } | { type: 'page'; status: number; head: string; html: string; data: string };
 
 /** Renders one public page on the server: run loaders, render, and collect hydration data. */
 export async function render({ request, apiBaseUrl, cookie }: RenderInput): Promise<RenderResult> {

@@ -20,7 +20,9 @@ export interface Cluster {
 function binDir(): string {
   if (process.env.RR_PG_BIN) return process.env.RR_PG_BIN;
   const base = '/usr/lib/postgresql';
-  const v = readdirSync(base).filter((d) => existsSync(path.join(base, d, 'bin', 'postgres'))).sort((a, b) => Number(b) - Number(a))[0];
+  const v = readdirSync(base)
+    .filter((d) => existsSync(path.join(base, d, 'bin', 'postgres')))
+    .sort((a, b) => Number(b) - Number(a))[0];
   if (!v) throw new Error('No PostgreSQL server found under /usr/lib/postgresql');
   return path.join(base, v, 'bin');
 }
@@ -60,7 +62,10 @@ function baseFolder(root: string): string {
 
 async function portFree(port: number): Promise<boolean> {
   return new Promise((resolve) => {
-    const srv = net.createServer().once('error', () => resolve(false)).once('listening', () => srv.close(() => resolve(true)));
+    const srv = net
+      .createServer()
+      .once('error', () => resolve(false))
+      .once('listening', () => srv.close(() => resolve(true)));
     srv.listen(port, '127.0.0.1');
   });
 }
@@ -88,7 +93,19 @@ export async function startCluster(root: string, name: string, preferredPort: nu
     const pwfile = path.join(base, 'pwfile');
     writeFileSync(pwfile, `${PG_PASSWORD}\n`, { mode: 0o600 });
     ownByPostgres(pwfile);
-    pgRun('initdb', ['-D', dataDir, '-U', 'postgres', '-A', 'scram-sha-256', `--pwfile=${pwfile}`, '-E', 'UTF8', '--locale=C', '--no-instructions']);
+    pgRun('initdb', [
+      '-D',
+      dataDir,
+      '-U',
+      'postgres',
+      '-A',
+      'scram-sha-256',
+      `--pwfile=${pwfile}`,
+      '-E',
+      'UTF8',
+      '--locale=C',
+      '--no-instructions',
+    ]);
   }
 
   // A cluster left running by an earlier, killed run is stopped and started again cleanly.

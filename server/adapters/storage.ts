@@ -15,7 +15,9 @@ export interface Storage {
 const PING_TIMEOUT_MS = 3_000;
 
 /** Builds the S3 client from config; a custom endpoint (s3rver, MinIO) uses path-style URLs. */
-export function createS3Storage(config: Pick<Config, 'S3_ENDPOINT' | 'S3_REGION' | 'S3_BUCKET' | 'S3_ACCESS_KEY_ID' | 'S3_SECRET_ACCESS_KEY' | 's3ForcePathStyle'>): Storage {
+export function createS3Storage(
+  config: Pick<Config, 'S3_ENDPOINT' | 'S3_REGION' | 'S3_BUCKET' | 'S3_ACCESS_KEY_ID' | 'S3_SECRET_ACCESS_KEY' | 's3ForcePathStyle'>,
+): Storage {
   const client = new S3Client({
     region: config.S3_REGION,
     ...(config.S3_ENDPOINT ? { endpoint: config.S3_ENDPOINT } : {}),

@@ -12,9 +12,17 @@ export async function listLatestEpisodes(db: Db, { limit, offset }: { limit: num
   const [rows, count] = await Promise.all([
     base
       .select([
-        'e.id', 'e.number', 'e.slug', 'e.title', 'e.summary', 'e.published_at',
-        'b.id as build_id', 'b.slug as build_slug', 'b.title as build_title',
-        'u.handle', 'u.display_name',
+        'e.id',
+        'e.number',
+        'e.slug',
+        'e.title',
+        'e.summary',
+        'e.published_at',
+        'b.id as build_id',
+        'b.slug as build_slug',
+        'b.title as build_title',
+        'u.handle',
+        'u.display_name',
       ])
       .orderBy('e.published_at', 'desc')
       .orderBy('e.id', 'desc')

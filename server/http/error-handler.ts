@@ -7,23 +7,42 @@ interface PgError {
 }
 
 // Connection-level failures: the database or a service is down, not the request's fault.
-const UNAVAILABLE_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'EPIPE', '57P01', '57P02', '57P03', '08000', '08003', '08006']);
+const UNAVAILABLE_CODES = new Set([
+  'ECONNREFUSED',
+  'ECONNRESET',
+  'ETIMEDOUT',
+  'EPIPE',
+  '57P01',
+  '57P02',
+  '57P03',
+  '08000',
+  '08003',
+  '08006',
+]);
 
 /** Maps any error to the one JSON error shape; never leaks stack traces or raw messages. */
 export function toHttpError(err: unknown): HttpError {
   if (err instanceof HttpError) return err;
   const e = err as { type?: string; status?: number; code?: string; message?: string } & PgError;
-  if (e?.type === 'entity.parse.failed') return new HttpError(400, 'malformed_json', 'The request body is not valid JSON', { body: ['not valid JSON'] });
+  if (e?.type === 'entity.parse.failed')
+    return new HttpError(400, 'malformed_json', 'The request body is not valid JSON', { body: ['not valid JSON'] });
   if (e?.type === 'entity.too.large') return new HttpError(413, 'payload_too_large', 'The request body is too large');
-  if (e?.type === 'encoding.unsupported' || e?.type === 'charset.unsupported') return new HttpError(415, 'unsupported_encoding', 'Unsupported request encoding');
-  if (e?.code === '23505') return new HttpError(409, 'conflict', 'That already exists', e.constraint ? { [e.constraint]: ['already exists'] } : undefined);
+  if (e?.type === 'encoding.unsupported' || e?.type === 'charset.unsupported')
+    return new HttpError(415, 'unsupported_encoding', 'Unsupported request encoding');
+  if (e?.code === '23505')
+    return new HttpError(409, 'conflict', 'That already exists', e.constraint ? { [e.constraint]: ['already exists'] } : undefined);
   if (e?.code === '23503') return new HttpError(409, 'conflict', 'A referenced record does not exist or is still in use');
   if (e?.code === '22P02' || e?.code === '22003') return new HttpError(400, 'invalid_request', 'A value is out of range or malformed');
-  if (e?.code && UNAVAILABLE_CODES.has(e.code)) return new HttpError(503, 'service_unavailable', 'A service this request needs is unavailable; try again shortly');
-  if (e?.message && /Connection terminated|timeout exceeded when trying to connect|Client has encountered a connection error/i.test(e.message)) {
+  if (e?.code && UNAVAILABLE_CODES.has(e.code))
+    return new HttpError(503, 'service_unavailable', 'A service this request needs is unavailable; try again shortly');
+  if (
+    e?.message &&
+    /Connection terminated|timeout exceeded when trying to connect|Client has encountered a connection error/i.test(e.message)
+  ) {
     return new HttpError(503, 'service_unavailable', 'A service this request needs is unavailable; try again shortly');
   }
-  if (typeof e?.status === 'number' && e.status >= 400 && e.status < 500) return new HttpError(e.status, 'invalid_request', 'The request could not be processed');
+  if (typeof e?.status === 'number' && e.status >= 400 && e.status < 500)
+    return new HttpError(e.status, 'invalid_request', 'The request could not be processed');
   return new HttpError(500, 'internal', 'Something went wrong on our side');
 }
 

@@ -12,7 +12,6 @@ export class HttpError extends Error {
 }
 
 export const notFound = (what = 'Resource') => new HttpError(404, 'not_found', `${what} not found`);
-export const badRequest = (message: string, fields?: Record<string, string[]>) =>
-  new HttpError(400, 'invalid_request', message, fields);
+export const badRequest = (message: string, fields?: Record<string, string[]>) => new HttpError(400, 'invalid_request', message, fields);
 export const serviceUnavailable = (message = 'A service this request needs is unavailable; try again shortly') =>
   new HttpError(503, 'service_unavailable', message);

@@ -19,7 +19,11 @@ export interface RouteContext<P, Q, B> {
 }
 
 /** One API route as the registry records it: the policy action and input schemas are data. */
-export interface RouteSpec<P extends z.ZodType | undefined = z.ZodType | undefined, Q extends z.ZodType | undefined = z.ZodType | undefined, B extends z.ZodType | undefined = z.ZodType | undefined> {
+export interface RouteSpec<
+  P extends z.ZodType | undefined = z.ZodType | undefined,
+  Q extends z.ZodType | undefined = z.ZodType | undefined,
+  B extends z.ZodType | undefined = z.ZodType | undefined,
+> {
   method: HttpMethod;
   /** Path below /api, in Express syntax: `/builds/:buildId/episodes`. */
   path: string;
@@ -33,9 +37,11 @@ export interface RouteSpec<P extends z.ZodType | undefined = z.ZodType | undefin
 }
 
 /** Declares a route; the only way to add an API endpoint. Export it in a `routes/<resource>.ts` list. */
-export function defineRoute<P extends z.ZodType | undefined = undefined, Q extends z.ZodType | undefined = undefined, B extends z.ZodType | undefined = undefined>(
-  spec: RouteSpec<P, Q, B>,
-): RouteSpec {
+export function defineRoute<
+  P extends z.ZodType | undefined = undefined,
+  Q extends z.ZodType | undefined = undefined,
+  B extends z.ZodType | undefined = undefined,
+>(spec: RouteSpec<P, Q, B>): RouteSpec {
   return spec as unknown as RouteSpec;
 }
 

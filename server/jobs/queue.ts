@@ -31,7 +31,10 @@ export class JobQueue {
   private readonly defs = new Map<string, JobDefinition>();
   private started = false;
 
-  constructor(connectionString: string, private readonly logger: Logger) {
+  constructor(
+    connectionString: string,
+    private readonly logger: Logger,
+  ) {
     this.boss = new PgBoss({ connectionString, schema: QUEUE_SCHEMA, max: 4, migrate: true });
     this.boss.on('error', (err) => this.logger.error({ err }, 'job queue error'));
   }
@@ -70,7 +73,9 @@ export class JobQueue {
   async send<T extends object>(name: string, data: T, opts: SendOptions = {}): Promise<string | null> {
     if (!this.defs.has(name)) throw new Error(`Unknown job "${name}"`);
     const { trx, ...rest } = opts;
-    const db = trx ? { executeSql: async (text: string, values: unknown[]) => trx.executeQuery(CompiledQuery.raw(text, values)) } : undefined;
+    const db = trx
+      ? { executeSql: async (text: string, values: unknown[]) => trx.executeQuery(CompiledQuery.raw(text, values)) }
+      : undefined;
     return this.boss.send(name, data, { ...rest, ...(db ? { db } : {}) });
   }
 

@@ -27,7 +27,15 @@ export interface OutboxOptions {
   batchSize?: number;
 }
 
-type Row = { id: number; message_id: string; to_address: string; subject: string; text_body: string; html_body: string | null; attempts: number };
+type Row = {
+  id: number;
+  message_id: string;
+  to_address: string;
+  subject: string;
+  text_body: string;
+  html_body: string | null;
+  attempts: number;
+};
 
 /**
  * The e-mail outbox: messages are rows written in the same transaction as their cause, and a
@@ -55,7 +63,13 @@ export class Outbox {
 
   /** Registers the delivery job (and a once-a-minute sweep) on the queue. */
   register(): void {
-    this.queue.define({ name: OUTBOX_JOB, handler: async () => void (await this.deliverDue()), cron: '* * * * *', retryLimit: 2, pollingIntervalSeconds: 1 });
+    this.queue.define({
+      name: OUTBOX_JOB,
+      handler: async () => void (await this.deliverDue()),
+      cron: '* * * * *',
+      retryLimit: 2,
+      pollingIntervalSeconds: 1,
+    });
   }
 
   /** Queues a message inside the caller's transaction; returns its row id. */
@@ -108,7 +122,14 @@ export class Outbox {
 
   private async deliver(row: Row): Promise<boolean> {
     try {
-      await this.mailer.send({ from: this.opts.from, to: row.to_address, subject: row.subject, text: row.text_body, html: row.html_body, messageId: row.message_id });
+      await this.mailer.send({
+        from: this.opts.from,
+        to: row.to_address,
+        subject: row.subject,
+        text: row.text_body,
+        html: row.html_body,
+        messageId: row.message_id,
+      });
     } catch (err) {
       const final = row.attempts >= this.maxAttempts;
       const delayMs = Math.min(this.baseBackoffMs * 2 ** (row.attempts - 1), 3_600_000);

@@ -63,7 +63,10 @@ export function createPageRenderer(distDir: string): RequestHandler {
         res.redirect(result.response.status, location);
         return;
       }
-      res.status(result.response.status).type('text/plain').send(await result.response.text());
+      res
+        .status(result.response.status)
+        .type('text/plain')
+        .send(await result.response.text());
       return;
     }
     const html = loaded.template

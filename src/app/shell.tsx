@@ -32,10 +32,7 @@ function navClass({ isActive }: { isActive: boolean }): string {
 /** Off-screen until focused, so keyboard readers can jump past the header. */
 export function SkipLink() {
   return (
-    <a
-      href="#main"
-      className="fixed top-2 left-2 z-50 -translate-y-[200%] bg-ink px-4 py-2 font-semibold text-paper focus:translate-y-0"
-    >
+    <a href="#main" className="fixed top-2 left-2 z-50 -translate-y-[200%] bg-ink px-4 py-2 font-semibold text-paper focus:translate-y-0">
       Skip to content
     </a>
   );
@@ -45,7 +42,10 @@ export function SiteHeader() {
   return (
     <header className="on-ink bg-ink text-paper">
       <div className="page-wrap flex flex-wrap items-center gap-x-7 gap-y-1 py-3">
-        <Link to={paths.home()} className="flex items-center gap-2.5 py-1 font-serif text-xl leading-none font-bold text-paper no-underline">
+        <Link
+          to={paths.home()}
+          className="flex items-center gap-2.5 py-1 font-serif text-xl leading-none font-bold text-paper no-underline"
+        >
           <Mark />
           {PRODUCT_NAME}
         </Link>
@@ -71,8 +71,8 @@ export function SiteFooter() {
       <div className="page-wrap py-6 text-[15px] text-ink-2">
         <p className="font-serif font-bold text-ink">{PRODUCT_NAME}</p>
         <p className="mt-1 max-w-measure">
-          Restorations of old cars, motorcycles, tractors and boats, published session by session: chapters, parts,
-          costs and torque figures beside every video.
+          Restorations of old cars, motorcycles, tractors and boats, published session by session: chapters, parts, costs and torque figures
+          beside every video.
         </p>
       </div>
     </footer>

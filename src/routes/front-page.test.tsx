@@ -82,7 +82,11 @@ describe('FrontPage', () => {
 
     const pages = screen.getByRole('navigation', { name: /pages/i });
     expect(within(pages).getByText(/page/i, { selector: 'p' }).textContent).toBe('Page 1 of 3');
-    expect(within(pages).getByRole('link', { name: /next page/i }).getAttribute('href')).toBe('/?page=2');
+    expect(
+      within(pages)
+        .getByRole('link', { name: /next page/i })
+        .getAttribute('href'),
+    ).toBe('/?page=2');
     expect(within(pages).queryByRole('link', { name: /previous page/i })).toBeNull();
   });
 

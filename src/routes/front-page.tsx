@@ -33,8 +33,8 @@ export function FrontPage() {
       <header className="max-w-measure">
         <h1 className="font-serif text-[27px] leading-tight font-bold md:text-[38px]">Restoration builds, episode by episode</h1>
         <p className="mt-3 font-serif text-[17px] leading-relaxed text-ink-2">
-          Every session in the garage is an episode here: the video, the chapters, the parts and what they cost, the torque
-          figures used and the jobs left for next time.
+          Every session in the garage is an episode here: the video, the chapters, the parts and what they cost, the torque figures used and
+          the jobs left for next time.
         </p>
       </header>
 

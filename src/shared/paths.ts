@@ -3,8 +3,7 @@ export const paths = {
   home: () => '/',
   frontPage: (page: number) => (page <= 1 ? '/' : `/?page=${page}`),
   creator: (handle: string) => `/creators/${encodeURIComponent(handle)}`,
-  build: (handle: string, buildSlug: string) =>
-    `/builds/${encodeURIComponent(handle)}/${encodeURIComponent(buildSlug)}`,
+  build: (handle: string, buildSlug: string) => `/builds/${encodeURIComponent(handle)}/${encodeURIComponent(buildSlug)}`,
   episode: (handle: string, buildSlug: string, episodeSlug: string) =>
     `/builds/${encodeURIComponent(handle)}/${encodeURIComponent(buildSlug)}/episodes/${encodeURIComponent(episodeSlug)}`,
 };

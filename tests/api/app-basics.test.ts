@@ -30,7 +30,11 @@ describe('errors', () => {
   it('answers a malformed JSON body with 400 JSON, not 500', async () => {
     const res = await fetch(`${app.baseUrl}/api/episodes`, { method: 'GET' });
     expect(res.status).toBe(200);
-    const bad = await fetch(`${app.baseUrl}/api/health`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: '{"title": ' });
+    const bad = await fetch(`${app.baseUrl}/api/health`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: '{"title": ',
+    });
     expect(bad.status).toBe(400);
     const body = await bad.json();
     expect(body.error.code).toBe('malformed_json');

@@ -49,7 +49,9 @@ describe('S3 fake', () => {
 
   it('returns a stored binary object byte for byte', async () => {
     const bytes = randomBytes(200 * 1024);
-    await client.send(new PutObjectCommand({ Bucket: 'test-media', Key: 'builds/1/frame.bin', Body: bytes, ContentType: 'application/octet-stream' }));
+    await client.send(
+      new PutObjectCommand({ Bucket: 'test-media', Key: 'builds/1/frame.bin', Body: bytes, ContentType: 'application/octet-stream' }),
+    );
     const got = await client.send(new GetObjectCommand({ Bucket: 'test-media', Key: 'builds/1/frame.bin' }));
     const body = Buffer.from(await got.Body!.transformToByteArray());
     expect(body.length).toBe(bytes.length);
@@ -79,8 +81,13 @@ describe('SMTP fake', () => {
   it('captures a message sent with nodemailer', async () => {
     await send('Pria@Demo.Rivet-Reel.test', 'New episode: sills', '<ep-12@rivet-reel.test>');
     const [message] = await list('?to=pria@demo.rivet-reel.test');
-    expect(message).toMatchObject({ subject: 'New episode: sills', to: ['pria@demo.rivet-reel.test'],
-      messageId: '<ep-12@rivet-reel.test>', from: 'noreply@rivet-reel.test', text: 'Body of New episode: sills\n' });
+    expect(message).toMatchObject({
+      subject: 'New episode: sills',
+      to: ['pria@demo.rivet-reel.test'],
+      messageId: '<ep-12@rivet-reel.test>',
+      from: 'noreply@rivet-reel.test',
+      text: 'Body of New episode: sills\n',
+    });
     expect(message?.size).toBeGreaterThan(0);
     expect(message?.headers['message-id']).toBe('<ep-12@rivet-reel.test>');
 
@@ -158,8 +165,14 @@ describe('GitHub OAuth fake', () => {
     const user = await fetch(`${gh.url}/user`, { headers: { authorization: `token ${token.access_token}` } });
     expect(user.status).toBe(200);
     const profile = (await user.json()) as Record<string, unknown>;
-    expect(profile).toMatchObject({ id: 910001, login: 'marta-kettleby', name: 'Marta Kettleby', email: 'marta@demo.rivet-reel.test',
-      avatar_url: `${gh.url}/avatars/marta-kettleby.svg`, html_url: `${gh.url}/people/marta-kettleby` });
+    expect(profile).toMatchObject({
+      id: 910001,
+      login: 'marta-kettleby',
+      name: 'Marta Kettleby',
+      email: 'marta@demo.rivet-reel.test',
+      avatar_url: `${gh.url}/avatars/marta-kettleby.svg`,
+      html_url: `${gh.url}/people/marta-kettleby`,
+    });
     const avatar = await fetch(String(profile.avatar_url));
     expect(avatar.headers.get('content-type')).toMatch(/^image\/svg\+xml/);
     expect(await avatar.text()).toContain('>MK</text>');
@@ -192,8 +205,15 @@ describe('GitHub OAuth fake', () => {
     }
     expect(page).toContain('name="new_login"');
 
-    const form = new URLSearchParams({ client_id: 'rivet-dev', redirect_uri: redirectUri, state: 'picker', scope: 'user:email',
-      new_login: 'tess-varnham', new_name: 'Tess Varnham', new_email: 'tess@example.test' });
+    const form = new URLSearchParams({
+      client_id: 'rivet-dev',
+      redirect_uri: redirectUri,
+      state: 'picker',
+      scope: 'user:email',
+      new_login: 'tess-varnham',
+      new_name: 'Tess Varnham',
+      new_email: 'tess@example.test',
+    });
     const res = await fetch(`${gh.url}/login/oauth/authorize`, { method: 'POST', body: form, redirect: 'manual' });
     expect(res.status).toBe(302);
     const back = new URL(res.headers.get('location') ?? '');

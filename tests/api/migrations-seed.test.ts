@@ -18,7 +18,9 @@ afterAll(async () => {
 });
 
 async function tables(): Promise<string[]> {
-  const r = await sql<{ table_name: string }>`select table_name from information_schema.tables where table_schema = 'public' order by table_name`.execute(handle.db);
+  const r = await sql<{
+    table_name: string;
+  }>`select table_name from information_schema.tables where table_schema = 'public' order by table_name`.execute(handle.db);
   return r.rows.map((t) => t.table_name);
 }
 
@@ -43,7 +45,11 @@ describe('demo seed', () => {
   it('creates the demo accounts, and running it twice leaves the same rows', async () => {
     await runSeed(handle.db);
     const first = await handle.db.selectFrom('users').select(['id', 'handle', 'display_name', 'is_admin']).orderBy('id').execute();
-    expect(first.map((u) => u.handle).sort()).toEqual(loadDemoAccounts().map((a) => a.login).sort());
+    expect(first.map((u) => u.handle).sort()).toEqual(
+      loadDemoAccounts()
+        .map((a) => a.login)
+        .sort(),
+    );
     expect(first.filter((u) => u.is_admin).map((u) => u.handle)).toEqual(['site-admin']);
 
     await runSeed(handle.db);

@@ -20,7 +20,9 @@ afterAll(async () => {
 const silent = pino({ level: 'silent' });
 
 async function queue(to: string, subject: string) {
-  return app.deps.db.transaction().execute((trx) => app.deps.outbox.enqueue(trx, { to, subject, text: `Body of ${subject}`, kind: 'test' }));
+  return app.deps.db
+    .transaction()
+    .execute((trx) => app.deps.outbox.enqueue(trx, { to, subject, text: `Body of ${subject}`, kind: 'test' }));
 }
 
 async function row(id: number) {
@@ -50,14 +52,20 @@ describe('e-mail outbox', () => {
   });
 
   it('does not queue the message when the surrounding transaction rolls back', async () => {
-    const before = await app.deps.db.selectFrom('outbox_messages').select((eb) => eb.fn.countAll<number>().as('n')).executeTakeFirstOrThrow();
+    const before = await app.deps.db
+      .selectFrom('outbox_messages')
+      .select((eb) => eb.fn.countAll<number>().as('n'))
+      .executeTakeFirstOrThrow();
     await expect(
       app.deps.db.transaction().execute(async (trx) => {
         await app.deps.outbox.enqueue(trx, { to: 'x@example.test', subject: 'Never', text: 'x', kind: 'test' });
         throw new Error('the causing event failed');
       }),
     ).rejects.toThrow('the causing event failed');
-    const after = await app.deps.db.selectFrom('outbox_messages').select((eb) => eb.fn.countAll<number>().as('n')).executeTakeFirstOrThrow();
+    const after = await app.deps.db
+      .selectFrom('outbox_messages')
+      .select((eb) => eb.fn.countAll<number>().as('n'))
+      .executeTakeFirstOrThrow();
     expect(after.n).toBe(before.n);
   });
 
@@ -67,14 +75,25 @@ describe('e-mail outbox', () => {
     for (let i = 0; i < 30; i += 1) ids.push(await queue(`racer${i}@example.test`, `Race ${i}`));
     // A second "process": its own pool and its own Outbox over the same database.
     const second = createDb(app.config.DATABASE_URL, { max: 3 });
-    const other = new Outbox(second.db, app.deps.queue, app.deps.mailer, silent, { from: app.config.MAIL_FROM, messageIdDomain: 'test', batchSize: 4 });
-    const mine = new Outbox(app.deps.db, app.deps.queue, app.deps.mailer, silent, { from: app.config.MAIL_FROM, messageIdDomain: 'test', batchSize: 4 });
+    const other = new Outbox(second.db, app.deps.queue, app.deps.mailer, silent, {
+      from: app.config.MAIL_FROM,
+      messageIdDomain: 'test',
+      batchSize: 4,
+    });
+    const mine = new Outbox(app.deps.db, app.deps.queue, app.deps.mailer, silent, {
+      from: app.config.MAIL_FROM,
+      messageIdDomain: 'test',
+      batchSize: 4,
+    });
     const [a, b] = await Promise.all([mine.deliverDue(), other.deliverDue()]);
     await second.destroy();
     expect(a.sent + b.sent).toBe(30);
     expect(a.sent).toBeGreaterThan(0);
     expect(b.sent).toBeGreaterThan(0);
-    const subjects = smtp.messages().map((m) => m.subject).filter((s) => s.startsWith('Race '));
+    const subjects = smtp
+      .messages()
+      .map((m) => m.subject)
+      .filter((s) => s.startsWith('Race '));
     expect(subjects).toHaveLength(30);
     expect(new Set(subjects).size).toBe(30);
   });
@@ -90,7 +109,11 @@ describe('e-mail outbox', () => {
         if (calls === 1) throw new Error('connection lost after the server accepted the message');
       },
     };
-    const outbox = new Outbox(app.deps.db, app.deps.queue, flaky, silent, { from: app.config.MAIL_FROM, messageIdDomain: 'test', baseBackoffMs: 0 });
+    const outbox = new Outbox(app.deps.db, app.deps.queue, flaky, silent, {
+      from: app.config.MAIL_FROM,
+      messageIdDomain: 'test',
+      baseBackoffMs: 0,
+    });
     const id = await queue('dup@example.test', 'Maybe twice');
     await outbox.deliverDue();
     await outbox.deliverDue();
@@ -102,7 +125,12 @@ describe('e-mail outbox', () => {
 
   it('gives up after too many attempts and marks the row failed', async () => {
     const down: Mailer = { ...app.deps.mailer, send: () => Promise.reject(new Error('550 mailbox unavailable')) };
-    const outbox = new Outbox(app.deps.db, app.deps.queue, down, silent, { from: app.config.MAIL_FROM, messageIdDomain: 'test', baseBackoffMs: 0, maxAttempts: 3 });
+    const outbox = new Outbox(app.deps.db, app.deps.queue, down, silent, {
+      from: app.config.MAIL_FROM,
+      messageIdDomain: 'test',
+      baseBackoffMs: 0,
+      maxAttempts: 3,
+    });
     const id = await queue('nobody@example.test', 'Undeliverable');
     for (let i = 0; i < 5; i += 1) await outbox.deliverDue();
     const r = await row(id);

@@ -14,7 +14,12 @@ beforeAll(async () => {
   app = await startTestApp({ distDir: TEST_DIST_DIR });
   const owner = await createUser(app.deps.db, { handle: 'tamsin-roe', display_name: 'Tamsin Roe' });
   const build = await createBuild(app.deps.db, { owner_id: owner.id, title: '1974 Fenwick Minor hatchback', slug: 'fenwick-minor' });
-  await createEpisode(app.deps.db, { build_id: build.id, title, slug: 'seized-caliper', summary: 'Front left caliper, a stuck piston and new seals.' });
+  await createEpisode(app.deps.db, {
+    build_id: build.id,
+    title,
+    slug: 'seized-caliper',
+    summary: 'Front left caliper, a stuck piston and new seals.',
+  });
   await createEpisode(app.deps.db, { build_id: build.id, title: 'Draft notes nobody should see', status: 'draft', published_at: null });
   browser = await launchBrowser();
 });

@@ -8,7 +8,16 @@ import { chromium, type Browser, type BrowserContext, type Page } from 'playwrig
 import { expect } from 'vitest';
 
 export const CHROMIUM_PATH = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
-const CHROMIUM_FLAGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
+const CHROMIUM_FLAGS = [
+  '--headless',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
 export const SCREENSHOT_DIR = path.resolve('.data/screenshots');
 export const PHONE_WIDTH = 375;
 const DESKTOP = { width: 1280, height: 900 };

@@ -30,7 +30,11 @@ export async function createBuild(db: Db, overrides: Partial<Insertable<BuildsTa
 export async function createEpisode(db: Db, overrides: Partial<Insertable<EpisodesTable>> = {}) {
   const buildId = overrides.build_id ?? (await createBuild(db)).id;
   const id = next();
-  const count = await db.selectFrom('episodes').where('build_id', '=', buildId).select((eb) => eb.fn.countAll<number>().as('n')).executeTakeFirstOrThrow();
+  const count = await db
+    .selectFrom('episodes')
+    .where('build_id', '=', buildId)
+    .select((eb) => eb.fn.countAll<number>().as('n'))
+    .executeTakeFirstOrThrow();
   return db
     .insertInto('episodes')
     .values({

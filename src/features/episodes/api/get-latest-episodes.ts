@@ -8,8 +8,7 @@ import { episodeKeys } from './keys';
 export function latestEpisodesOptions(api: ApiClient, q: LatestEpisodesQuery) {
   return queryOptions({
     queryKey: episodeKeys.latest(q),
-    queryFn: ({ signal }) =>
-      api.get(`/api/episodes?page=${q.page}&perPage=${q.perPage}`, latestEpisodesResponse, signal),
+    queryFn: ({ signal }) => api.get(`/api/episodes?page=${q.page}&perPage=${q.perPage}`, latestEpisodesResponse, signal),
   });
 }
 
