@@ -19,7 +19,7 @@ export default async function setup(project: TestProject) {
   let cluster: Cluster | undefined;
   let adminUrl = process.env.TEST_PG_ADMIN_URL;
   if (!adminUrl) {
-    cluster = await startCluster(root, 'test', 54330, { durable: false });
+    cluster = await startCluster(root, 'test', Number(process.env.RR_TEST_PG_PORT ?? 54330), { durable: false });
     adminUrl = cluster.url('postgres');
   }
   const template = `rr_template_${project.name}`;
