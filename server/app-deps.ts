@@ -1,8 +1,10 @@
+import type pg from 'pg';
 import type { Logger } from 'pino';
 import type { Mailer } from './adapters/mail';
 import type { Storage } from './adapters/storage';
 import type { Config } from './config';
 import type { Db } from './db/kysely';
+import type { RateLimits } from './http/rate-limit';
 import type { JobQueue } from './jobs/queue';
 import type { Outbox } from './services/outbox';
 
@@ -10,6 +12,9 @@ import type { Outbox } from './services/outbox';
 export interface AppDeps {
   config: Config;
   db: Db;
+  /** The pool under `db`, for libraries that need pg itself (sessions, rate limits). */
+  pool: pg.Pool;
+  rateLimits: RateLimits;
   storage: Storage;
   mailer: Mailer;
   queue: JobQueue;

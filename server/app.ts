@@ -3,17 +3,27 @@ import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import type { AppDeps } from './app-deps';
+import { actorMiddleware } from './auth/actor';
+import { githubAuthRouter } from './auth/github';
+import { sessionMiddleware } from './auth/session';
+import { csrf } from './http/csrf';
 import { apiNotFound, errorHandler } from './http/error-handler';
 import { buildApiRouter } from './http/registry';
 import { routeRegistry } from './routes';
 import { createPageRenderer, distPaths } from './ssr/page-renderer';
+
+/** Express's trust-proxy value from config: a hop count, true/false, or names/addresses. */
+function trustProxy(value: string): boolean | number | string {
+  if (/^\d+$/.test(value)) return Number(value);
+  if (value === 'true' || value === 'false') return value === 'true';
+  return value;
+}
 
 /** Builds the Express app from its dependencies; listening is the caller's business. */
 export function createApp(deps: AppDeps): Express {
   const { config } = deps;
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
 
   app.use(
     helmet({
@@ -39,11 +49,17 @@ export function createApp(deps: AppDeps): Express {
   );
   app.use(pinoHttp({ logger: deps.logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
 
+  app.set('trust proxy', trustProxy(config.TRUST_PROXY));
+  const sessions = sessionMiddleware(deps.pool, config);
+  const actor = actorMiddleware(deps.db);
+
   const api = express.Router();
   api.use(express.json({ limit: '1mb' }));
+  api.use(sessions, actor, csrf.csrfSynchronisedProtection);
   api.use(buildApiRouter(routeRegistry, deps));
   api.use(apiNotFound);
   app.use('/api', api);
+  app.use('/auth', sessions, githubAuthRouter(deps));
 
   const { client } = distPaths(config.DIST_DIR);
   // Hashed assets never change under their name: cache them for a year.

@@ -16,6 +16,11 @@ const schema = z
     DATABASE_URL: z.string().regex(/^postgres(ql)?:\/\//, 'must be a postgres:// connection URL'),
     DATABASE_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
     SESSION_SECRET: z.string().min(32, 'must be at least 32 characters').default(DEV_SESSION_SECRET),
+    SESSION_MAX_AGE_DAYS: z.coerce.number().int().min(1).max(365).default(30),
+    /** Express's trust-proxy setting: `loopback`, a hop count, or a list of addresses. */
+    TRUST_PROXY: z.string().min(1).default('loopback'),
+    /** Multiplies every rate limit's allowance (tests that sign many people in from one address). */
+    RATE_LIMIT_MULTIPLIER: z.coerce.number().int().min(1).max(100_000).default(1),
     S3_ENDPOINT: z.url().optional(),
     S3_REGION: z.string().min(1).default('us-east-1'),
     S3_BUCKET: z

@@ -4,6 +4,7 @@ import { createS3Storage } from './adapters/storage';
 import type { AppDeps } from './app-deps';
 import type { Config } from './config';
 import { createDb } from './db/kysely';
+import { createRateLimits } from './http/rate-limit';
 import { registerJobs } from './jobs';
 import { JobQueue } from './jobs/queue';
 import { Outbox, type OutboxOptions } from './services/outbox';
@@ -15,7 +16,7 @@ export interface RunningDeps extends AppDeps {
 
 /** Opens the real dependencies from config (the queue is created but not started). */
 export function createDeps(config: Config, logger: Logger, overrides: { outbox?: Partial<OutboxOptions> } = {}): RunningDeps {
-  const { db, destroy } = createDb(config.DATABASE_URL, {
+  const { db, pool, destroy } = createDb(config.DATABASE_URL, {
     max: config.DATABASE_POOL_MAX,
     onError: (err) => logger.warn({ err }, 'idle database client error'),
   });
@@ -27,7 +28,7 @@ export function createDeps(config: Config, logger: Logger, overrides: { outbox?:
     messageIdDomain: new URL(config.PUBLIC_URL).hostname,
     ...overrides.outbox,
   });
-  const deps: AppDeps = { config, db, storage, mailer, queue, outbox, logger };
+  const deps: AppDeps = { config, db, pool, rateLimits: createRateLimits(pool, config.RATE_LIMIT_MULTIPLIER), storage, mailer, queue, outbox, logger };
   registerJobs(deps);
   return {
     ...deps,

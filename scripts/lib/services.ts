@@ -1,5 +1,6 @@
 // The local services `npm start` and `npm run dev` share: PostgreSQL, the fakes, migrations and
 // demo data, plus the environment the server needs to use them.
+import { writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { startAllFakes } from '../../fakes/all';
 import { migrateDatabase } from '../migrate';
@@ -37,6 +38,8 @@ export async function startLocalServices(root: string, log: (msg: string) => voi
     log(`PostgreSQL on 127.0.0.1:${cluster.port} (data in ${cluster.dataDir})`);
     await ensureDatabase(cluster.url('postgres'), 'rivet_reel');
     const databaseUrl = cluster.url('rivet_reel');
+    // For operator commands (npm run admin:grant) while npm start runs.
+    writeFileSync(path.join(root, '.data', 'dev-database-url'), `${databaseUrl}\n`, { mode: 0o600 });
 
     const fakes = await startAllFakes({
       ...env,

@@ -1,31 +1,62 @@
+import type { BuildVisibility } from '../db/database';
 import { HttpError } from '../http/http-error';
+import type { Actor, SignedIn } from './actor';
 
-/** Who is making a request: a signed-in account, or null for a visitor. */
-export type Actor = { userId: number; isAdmin: boolean } | null;
+export type { Actor } from './actor';
 
-type Rule = { signedIn: boolean; allow: (actor: Actor) => boolean };
+/** What an action is about, loaded by the route before the policy decides. */
+export type Resource =
+  | { kind: 'build'; id: number; visibility: BuildVisibility }
+  | { kind: 'account'; userId: number };
+
+type Rule = {
+  /** Visitors get 401 (sign in) rather than 403 when denied. */
+  signedIn: boolean;
+  allow: (actor: Actor, resource: Resource | undefined) => boolean;
+};
+
+const role = (actor: Actor, buildId: number) => actor?.builds.get(buildId);
+const isTeam = (actor: Actor, r: Resource | undefined) => r?.kind === 'build' && role(actor, r.id) !== undefined;
+const isOwner = (actor: Actor, r: Resource | undefined) => r?.kind === 'build' && role(actor, r.id) === 'owner';
 
 /**
- * The one table of what each action needs. Routes name an action in the route registry;
- * resource-level checks (build membership, hidden drafts) are added here by later features.
+ * The one table of who may do what (DESIGN.md, "People and roles"). Routes name an action in
+ * the route registry; nothing else decides permissions.
  */
 const rules = {
   'site.read': { signedIn: false, allow: () => true },
-  'admin.access': { signedIn: true, allow: (a) => a?.isAdmin === true },
+  'account.self': { signedIn: true, allow: (a) => a !== null },
+  'build.team.read': { signedIn: true, allow: isTeam },
+  'build.team.manage': { signedIn: true, allow: isOwner },
+  'admin.accounts': { signedIn: true, allow: (a) => a?.isAdmin === true },
 } satisfies Record<string, Rule>;
 
 export type PolicyAction = keyof typeof rules;
 export const policyActions = Object.keys(rules) as PolicyAction[];
 
-/** True when the actor may perform the action. */
-export function can(actor: Actor, action: PolicyAction): boolean {
-  return rules[action].allow(actor);
+/** May the actor see this resource exists at all? Hidden ones answer 404, never 401/403. */
+export function canSee(actor: Actor, resource: Resource | undefined): boolean {
+  if (!resource) return true;
+  if (resource.kind === 'build') return resource.visibility !== 'private' || role(actor, resource.id) !== undefined;
+  return true;
 }
 
-/** Throws 401 for a visitor where sign-in is needed, 403 when signed in but not allowed. */
-export function authorize(actor: Actor, action: PolicyAction): void {
+/** True when the actor may perform the action on the resource. */
+export function can(actor: Actor, action: PolicyAction, resource?: Resource): boolean {
+  return canSee(actor, resource) && (rules[action] as Rule).allow(actor, resource);
+}
+
+/** Throws 404 for a hidden resource, 401 for a visitor where sign-in is needed, 403 otherwise. */
+export function authorize(actor: Actor, action: PolicyAction, resource?: Resource): asserts actor is SignedIn | null {
+  if (!canSee(actor, resource)) throw new HttpError(404, 'not_found', 'Not found');
   const rule: Rule = rules[action];
-  if (rule.allow(actor)) return;
+  if (rule.allow(actor, resource)) return;
   if (!actor && rule.signedIn) throw new HttpError(401, 'unauthenticated', 'Sign in to do this');
   throw new HttpError(403, 'forbidden', 'You may not do this');
+}
+
+/** For handlers of signed-in actions: the actor, typed as signed in. */
+export function signedIn(actor: Actor): SignedIn {
+  if (!actor) throw new HttpError(401, 'unauthenticated', 'Sign in to do this');
+  return actor;
 }

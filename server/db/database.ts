@@ -14,8 +14,86 @@ export interface UsersTable {
   email: string | null;
   avatar_url: string | null;
   is_admin: Generated<boolean>;
+  notice_email: string | null;
+  suspended_at: NullableTimestamp;
+  deleted_at: NullableTimestamp;
   created_at: Generated<Date>;
   updated_at: Generated<Date>;
+}
+
+export type IdentityProvider = 'github' | 'email';
+export type BuildRole = 'owner' | 'editor';
+export type InvitationKind = 'build-editor' | 'sponsor-member';
+
+export interface IdentitiesTable {
+  id: Generated<number>;
+  user_id: number;
+  provider: IdentityProvider;
+  provider_uid: string;
+  created_at: Generated<Date>;
+  last_used_at: NullableTimestamp;
+}
+
+export interface SessionsTable {
+  sid: string;
+  sess: unknown;
+  expire: Timestamp;
+}
+
+export interface BuildMembersTable {
+  id: Generated<number>;
+  build_id: number;
+  user_id: number;
+  role: BuildRole;
+  created_at: Generated<Date>;
+}
+
+export interface SponsorMembersTable {
+  id: Generated<number>;
+  sponsor_id: number;
+  user_id: number;
+  created_at: Generated<Date>;
+}
+
+export interface SignInTokensTable {
+  id: Generated<number>;
+  token_hash: string;
+  email: string;
+  return_to: string | null;
+  expires_at: Timestamp;
+  used_at: NullableTimestamp;
+  created_at: Generated<Date>;
+}
+
+export interface InvitationsTable {
+  id: Generated<number>;
+  kind: InvitationKind;
+  build_id: number | null;
+  sponsor_id: number | null;
+  email: string;
+  token_hash: string;
+  invited_by: number | null;
+  expires_at: Timestamp;
+  last_sent_at: Generated<Date>;
+  accepted_at: NullableTimestamp;
+  accepted_by: number | null;
+  revoked_at: NullableTimestamp;
+  created_at: Generated<Date>;
+}
+
+export interface AuditEventsTable {
+  id: Generated<number>;
+  actor_id: number | null;
+  action: string;
+  subject_user_id: number | null;
+  details: ColumnType<Record<string, unknown>, string | undefined, string>;
+  created_at: Generated<Date>;
+}
+
+export interface RateLimitsTable {
+  key: string;
+  points: number;
+  expire: number | null;
 }
 
 export interface BuildsTable {
@@ -82,4 +160,12 @@ export interface Database {
   sponsors: SponsorsTable;
   outbox_messages: OutboxMessagesTable;
   seed_runs: SeedRunsTable;
+  identities: IdentitiesTable;
+  sessions: SessionsTable;
+  build_members: BuildMembersTable;
+  sponsor_members: SponsorMembersTable;
+  sign_in_tokens: SignInTokensTable;
+  invitations: InvitationsTable;
+  audit_events: AuditEventsTable;
+  rate_limits: RateLimitsTable;
 }

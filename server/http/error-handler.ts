@@ -24,6 +24,7 @@ const UNAVAILABLE_CODES = new Set([
 export function toHttpError(err: unknown): HttpError {
   if (err instanceof HttpError) return err;
   const e = err as { type?: string; status?: number; code?: string; message?: string } & PgError;
+  if (e?.code === 'csrf_invalid') return new HttpError(403, 'csrf_invalid', 'Missing or invalid CSRF token; reload the page and try again');
   if (e?.type === 'entity.parse.failed')
     return new HttpError(400, 'malformed_json', 'The request body is not valid JSON', { body: ['not valid JSON'] });
   if (e?.type === 'entity.too.large') return new HttpError(413, 'payload_too_large', 'The request body is too large');
@@ -52,6 +53,7 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, next) => {
   const httpError = toHttpError(err);
   if (httpError.status >= 500) req.log?.error({ err }, 'request failed');
   if (httpError.status === 503) res.setHeader('retry-after', '5');
+  for (const [k, v] of Object.entries(httpError.headers ?? {})) res.setHeader(k, v);
   res.status(httpError.status).json({
     error: { code: httpError.code, message: httpError.message, ...(httpError.fields ? { fields: httpError.fields } : {}) },
   });

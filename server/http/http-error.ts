@@ -5,6 +5,8 @@ export class HttpError extends Error {
     readonly code: string,
     message: string,
     readonly fields?: Record<string, string[]>,
+    /** Extra response headers, e.g. Retry-After on 429. */
+    readonly headers?: Record<string, string>,
   ) {
     super(message);
     this.name = 'HttpError';

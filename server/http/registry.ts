@@ -1,8 +1,10 @@
 import { Router, type Request, type Response } from 'express';
 import type { z } from 'zod';
 import type { AppDeps } from '../app-deps';
-import { authorize, type Actor, type PolicyAction } from '../auth/policy';
+import { authorize, type Actor, type PolicyAction, type Resource } from '../auth/policy';
+import { HttpError } from './http-error';
 import { parse } from './parse';
+import type { RateLimitName } from './rate-limit';
 
 export type HttpMethod = 'get' | 'post' | 'put' | 'patch' | 'delete';
 
@@ -16,6 +18,8 @@ export interface RouteContext<P, Q, B> {
   params: P;
   query: Q;
   body: B;
+  /** The resource the policy decided on, when the route loads one. */
+  resource: Resource | undefined;
 }
 
 /** One API route as the registry records it: the policy action and input schemas are data. */
@@ -32,6 +36,10 @@ export interface RouteSpec<
   params?: P;
   query?: Q;
   body?: B;
+  /** Loads what the action is about from the parsed params; null means 404. */
+  resource?: (deps: AppDeps, params: Infer<P>) => Promise<Resource | null>;
+  /** Spends one point of each named limit per request, keyed as returned (after validation). */
+  rateLimit?: (ctx: { req: Request; body: Infer<B>; actor: Actor }) => Array<[RateLimitName, string]>;
   /** Returns the JSON body to send (status 200 unless the handler set another), or sends itself. */
   handler: (ctx: RouteContext<Infer<P>, Infer<Q>, Infer<B>>) => unknown;
 }
@@ -45,22 +53,31 @@ export function defineRoute<
   return spec as unknown as RouteSpec;
 }
 
-/** The actor for this request; the accounts feature sets `req.actor` from the session. */
+/** The actor for this request, set by the session middleware (`req.actor`). */
 export function actorOf(req: Request): Actor {
   return (req as Request & { actor?: Actor }).actor ?? null;
 }
 
-/** Builds the /api router from the registry: authorise → validate → handle → present. */
+/**
+ * Builds the /api router from the registry, one order for every route:
+ * params → resource (404) → policy (401/403/404) → query and body (400) → rate limit (429) → handler.
+ */
 export function buildApiRouter(routes: readonly RouteSpec[], deps: AppDeps): Router {
   const router = Router();
   for (const spec of routes) {
     router[spec.method](spec.path, async (req, res) => {
       const actor = actorOf(req);
-      authorize(actor, spec.action);
       const params = spec.params ? parse(spec.params, req.params, 'params') : undefined;
+      let resource: Resource | undefined;
+      if (spec.resource) {
+        resource = (await spec.resource(deps, params)) ?? undefined;
+        if (!resource) throw new HttpError(404, 'not_found', 'Not found');
+      }
+      authorize(actor, spec.action, resource);
       const query = spec.query ? parse(spec.query, req.query, 'query') : undefined;
       const body = spec.body ? parse(spec.body, req.body ?? {}, 'body') : undefined;
-      const result = await spec.handler({ req, res, deps, actor, params, query, body });
+      for (const [name, key] of spec.rateLimit?.({ req, body, actor }) ?? []) await deps.rateLimits.consume(name, key);
+      const result = await spec.handler({ req, res, deps, actor, params, query, body, resource });
       if (!res.headersSent) {
         if (result === undefined) res.status(res.statusCode === 200 ? 204 : res.statusCode).end();
         else res.json(result);

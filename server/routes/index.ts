@@ -1,6 +1,17 @@
 import type { RouteSpec } from '../http/registry';
+import { accountRoutes } from './account';
+import { adminRoutes } from './admin';
 import { episodeRoutes } from './episodes';
 import { healthRoutes } from './health';
+import { invitationRoutes } from './invitations';
+import { sessionRoutes } from './session';
 
 /** The route registry: every API route, in one list that the authorisation matrix and fuzzers read. */
-export const routeRegistry: readonly RouteSpec[] = [...healthRoutes, ...episodeRoutes];
+export const routeRegistry: readonly RouteSpec[] = [
+  ...healthRoutes,
+  ...episodeRoutes,
+  ...sessionRoutes,
+  ...accountRoutes,
+  ...invitationRoutes,
+  ...adminRoutes,
+];

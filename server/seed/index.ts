@@ -2,9 +2,10 @@ import { sql } from 'kysely';
 import type { Db } from '../db/kysely';
 import type { SeedSection } from './section';
 import { demoAccountsSection } from './sections/demo-accounts';
+import { demoBuildsSection } from './sections/demo-builds';
 
 /** Every demo-seed section, in the order they run (later sections may use earlier ones' rows). */
-export const seedSections: readonly SeedSection[] = [demoAccountsSection];
+export const seedSections: readonly SeedSection[] = [demoAccountsSection, demoBuildsSection];
 
 /** Runs every section in its own transaction; safe to run on every start. */
 export async function runSeed(db: Db, sections: readonly SeedSection[] = seedSections): Promise<string[]> {

@@ -1,4 +1,5 @@
 import { mkdtemp, rm } from 'node:fs/promises';
+import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
@@ -8,9 +9,10 @@ import { startSmtpFake, type SmtpFake } from '../../fakes/smtp';
 import { createApp } from '../../server/app';
 import { loadConfig, type Config } from '../../server/config';
 import { createDeps, type RunningDeps } from '../../server/deps';
-import { createTestDatabase, type TestDatabase } from './test-db';
+import { createTestDatabase, existingTestDatabase, type TestDatabase } from './test-db';
 
 export const TEST_BUCKET = 'rivet-reel-test';
+export const TEST_SESSION_SECRET = 'test-session-secret-0123456789-abcdefghij';
 
 export interface TestApp {
   /** Where the suites send HTTP: the in-process app on an ephemeral loopback port. */
@@ -28,16 +30,27 @@ export interface TestApp {
 export interface TestAppOptions {
   distDir?: string;
   env?: Record<string, string>;
+  /** Serve an existing database (e.g. one kept by an earlier app) instead of creating a fresh one. */
+  databaseUrl?: string;
+  /** Leave the database in place on stop(), so another app or process can use it afterwards. */
+  keepDatabase?: boolean;
 }
 
 /** Starts the whole app in-process over a fresh database and fresh S3/SMTP fakes. */
 export async function startTestApp(opts: TestAppOptions = {}): Promise<TestApp> {
-  const database = await createTestDatabase();
+  const database = opts.databaseUrl ? existingTestDatabase(opts.databaseUrl) : await createTestDatabase();
   const dir = await mkdtemp(path.join(os.tmpdir(), 'rr-test-'));
   const s3 = await startS3Fake({ port: 0, directory: path.join(dir, 's3'), buckets: [TEST_BUCKET] });
   const smtp = await startSmtpFake({ smtpPort: 0, httpPort: 0 });
+  // Listen first so PUBLIC_URL (OAuth callback, e-mailed links) can name the real port.
+  const server = http.createServer();
+  server.listen(0, '127.0.0.1');
+  await new Promise<void>((resolve) => server.once('listening', resolve));
+  const { port } = server.address() as AddressInfo;
   const config = loadConfig({
     NODE_ENV: 'test',
+    PUBLIC_URL: `http://127.0.0.1:${port}`,
+    SESSION_SECRET: TEST_SESSION_SECRET,
     LOG_LEVEL: 'silent',
     DATABASE_URL: database.url,
     DATABASE_POOL_MAX: '5',
@@ -51,9 +64,7 @@ export async function startTestApp(opts: TestAppOptions = {}): Promise<TestApp> 
   const deps = createDeps(config, pino({ level: 'silent' }), { outbox: { baseBackoffMs: 0 } });
   // No workers poll in tests: jobs run when a test calls runJobs(), so results are deterministic.
   await deps.queue.start({ workers: false });
-  const server = createApp(deps).listen(0, '127.0.0.1');
-  await new Promise<void>((resolve) => server.once('listening', resolve));
-  const { port } = server.address() as AddressInfo;
+  server.on('request', createApp(deps));
 
   return {
     baseUrl: `http://127.0.0.1:${port}`,
@@ -77,7 +88,7 @@ export async function startTestApp(opts: TestAppOptions = {}): Promise<TestApp> 
       await new Promise<void>((resolve) => server.close(() => resolve()));
       await deps.close();
       await Promise.allSettled([s3.stop(), smtp.stop()]);
-      await database.drop();
+      if (!opts.keepDatabase) await database.drop();
       await rm(dir, { recursive: true, force: true });
     },
   };

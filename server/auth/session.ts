@@ -1,0 +1,43 @@
+import connectPgSimple from 'connect-pg-simple';
+import session from 'express-session';
+import type pg from 'pg';
+import type { Config } from '../config';
+
+export const SESSION_COOKIE = 'rr_sid';
+
+/**
+ * Sessions live in PostgreSQL so any server process can serve any request. No row is written
+ * until something is stored in the session (sign-in, a CSRF token, OAuth state).
+ */
+export function sessionMiddleware(pool: pg.Pool, config: Config) {
+  const PgStore = connectPgSimple(session);
+  return session({
+    store: new PgStore({ pool, tableName: 'sessions', createTableIfMissing: false, pruneSessionInterval: false }),
+    name: SESSION_COOKIE,
+    secret: config.SESSION_SECRET,
+    resave: false,
+    saveUninitialized: false,
+    cookie: {
+      httpOnly: true,
+      sameSite: 'lax',
+      secure: config.PUBLIC_URL.startsWith('https:'),
+      maxAge: config.SESSION_MAX_AGE_DAYS * 24 * 3600 * 1000,
+    },
+  });
+}
+
+/** Starts a fresh session for a signed-in account (a new id, so a planted one is useless). */
+export function signInSession(req: import('express').Request, userId: number): Promise<void> {
+  return new Promise((resolve, reject) => {
+    req.session.regenerate((err) => {
+      if (err) return reject(err);
+      req.session.userId = userId;
+      req.session.save((saveErr) => (saveErr ? reject(saveErr) : resolve()));
+    });
+  });
+}
+
+/** Ends the session and its row. */
+export function endSession(req: import('express').Request): Promise<void> {
+  return new Promise((resolve, reject) => req.session.destroy((err) => (err ? reject(err) : resolve())));
+}

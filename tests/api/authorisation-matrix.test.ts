@@ -1,0 +1,139 @@
+// The authorisation matrix: every route in the registry × every kind of actor, with the status
+// each must get. Written by hand from DESIGN.md's role table ("People and roles"), not recorded
+// from what the code answers. Mutations are sent with a body the schema refuses, so an allowed
+// actor gets 400 (it passed the policy) and nothing changes; routes without a body act for real,
+// which is why each route gets a fresh world.
+import { sql } from 'kysely';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { hashToken } from '../../server/services/tokens';
+import { routeRegistry } from '../../server/routes';
+import { createBuild, createUser } from '../helpers/factories';
+import { signInByEmail, TestClient } from '../helpers/http-client';
+import { startTestApp, type TestApp } from '../helpers/test-app';
+
+const ACTORS = ['visitor', 'follower', 'editor', 'owner', 'otherOwner', 'sponsorMember', 'admin'] as const;
+type ActorName = (typeof ACTORS)[number];
+type Row = Record<ActorName, number>;
+
+interface World {
+  ids: { buildA: number; editor: number; follower: number; invitation: number };
+  clients: Record<ActorName, TestClient>;
+}
+
+/** Expected status per actor; `all(s)` for routes anyone may call. */
+const all = (s: number): Row => ({ visitor: s, follower: s, editor: s, owner: s, otherOwner: s, sponsorMember: s, admin: s });
+const signedIn = (s: number): Row => ({ ...all(s), visitor: 401 });
+const ownerOnly = (s: number): Row => ({ visitor: 401, follower: 403, editor: 403, owner: s, otherOwner: 403, sponsorMember: 403, admin: 403 });
+const teamOnly = (s: number): Row => ({ ...ownerOnly(s), editor: s });
+const adminOnly = (s: number): Row => ({ visitor: 401, follower: 403, editor: 403, owner: 403, otherOwner: 403, sponsorMember: 403, admin: s });
+
+/** Route → request to send (with the world's ids) → expected statuses. Later issues add rows. */
+const matrix: Record<string, { request: (w: World) => { path: string; body?: unknown }; expect: Row }> = {
+  'GET /health': { request: () => ({ path: '/api/health' }), expect: all(200) },
+  'GET /episodes': { request: () => ({ path: '/api/episodes' }), expect: all(200) },
+  'GET /session': { request: () => ({ path: '/api/session' }), expect: all(200) },
+  'GET /csrf-token': { request: () => ({ path: '/api/csrf-token' }), expect: all(200) },
+  'POST /session/sign-out': { request: () => ({ path: '/api/session/sign-out', body: { junk: 1 } }), expect: signedIn(400) },
+  'POST /sign-in-links': { request: () => ({ path: '/api/sign-in-links', body: { email: 'not an address' } }), expect: all(400) },
+  'POST /sign-in-links/redeem': { request: () => ({ path: '/api/sign-in-links/redeem', body: { token: 'short' } }), expect: all(400) },
+  'PATCH /account': { request: () => ({ path: '/api/account', body: {} }), expect: signedIn(400) },
+  'GET /account/export': { request: () => ({ path: '/api/account/export' }), expect: signedIn(200) },
+  // Owners must transfer or delete their builds first (409); everyone else's account goes (204).
+  'DELETE /account': { request: () => ({ path: '/api/account' }), expect: { ...signedIn(204), owner: 409, otherOwner: 409 } },
+  'GET /builds/:buildId/members': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}/members` }), expect: teamOnly(200) },
+  'DELETE /builds/:buildId/members/:userId': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}/members/${w.ids.editor}` }), expect: ownerOnly(204) },
+  'GET /builds/:buildId/invitations': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}/invitations` }), expect: ownerOnly(200) },
+  'POST /builds/:buildId/invitations': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}/invitations`, body: { email: 'nope' } }), expect: ownerOnly(400) },
+  'POST /invitations/:invitationId/resend': { request: (w) => ({ path: `/api/invitations/${w.ids.invitation}/resend`, body: { junk: 1 } }), expect: ownerOnly(400) },
+  'DELETE /invitations/:invitationId': { request: (w) => ({ path: `/api/invitations/${w.ids.invitation}` }), expect: ownerOnly(204) },
+  'POST /invitations/lookup': { request: () => ({ path: '/api/invitations/lookup', body: { token: 'short' } }), expect: all(400) },
+  'POST /invitations/accept': { request: () => ({ path: '/api/invitations/accept', body: { token: 'short' } }), expect: signedIn(400) },
+  'GET /admin/accounts': { request: () => ({ path: '/api/admin/accounts' }), expect: adminOnly(200) },
+  'POST /admin/accounts/:userId/actions': { request: (w) => ({ path: `/api/admin/accounts/${w.ids.follower}/actions`, body: { action: 'bogus' } }), expect: adminOnly(400) },
+};
+
+let app: TestApp;
+beforeAll(async () => {
+  app = await startTestApp({ env: { RATE_LIMIT_MULTIPLIER: '1000' } });
+});
+afterAll(async () => {
+  await app?.stop();
+});
+
+/** A fresh cast: build A (public) with its owner and an editor, build B with another owner, a sponsor with a member, an admin. */
+async function makeWorld(visibility: 'public' | 'unlisted' | 'private' = 'public'): Promise<World> {
+  const db = app.deps.db;
+  const users = {} as Record<Exclude<ActorName, 'visitor'>, { id: number; email: string }>;
+  for (const name of ACTORS.filter((a) => a !== 'visitor')) {
+    const u = await createUser(db, { is_admin: name === 'admin' });
+    users[name as Exclude<ActorName, 'visitor'>] = { id: u.id, email: u.email! };
+  }
+  const buildA = await createBuild(db, { owner_id: users.owner.id, visibility });
+  const buildB = await createBuild(db, { owner_id: users.otherOwner.id });
+  await db
+    .insertInto('build_members')
+    .values([
+      { build_id: buildA.id, user_id: users.owner.id, role: 'owner' },
+      { build_id: buildA.id, user_id: users.editor.id, role: 'editor' },
+      { build_id: buildB.id, user_id: users.otherOwner.id, role: 'owner' },
+    ])
+    .execute();
+  const sponsor = await db.insertInto('sponsors').values({ slug: `sponsor-${buildA.id}`, name: 'Invented Parts Co-op' }).returning('id').executeTakeFirstOrThrow();
+  await db.insertInto('sponsor_members').values({ sponsor_id: sponsor.id, user_id: users.sponsorMember.id }).execute();
+  const invitation = await db
+    .insertInto('invitations')
+    .values({ kind: 'build-editor', build_id: buildA.id, email: `invitee-${buildA.id}@example.test`, token_hash: hashToken(`matrix-token-${buildA.id}`), invited_by: users.owner.id, expires_at: sql<Date>`now() + interval '7 days'` })
+    .returning('id')
+    .executeTakeFirstOrThrow();
+
+  const clients = {} as Record<ActorName, TestClient>;
+  for (const name of ACTORS) {
+    clients[name] = new TestClient(app.baseUrl);
+    if (name !== 'visitor') await signInByEmail(clients[name], db, users[name].email);
+  }
+  return { ids: { buildA: buildA.id, editor: users.editor.id, follower: users.follower.id, invitation: invitation.id }, clients };
+}
+
+describe('authorisation matrix', () => {
+  it('has a row for every route in the registry, and no row for a route that does not exist', () => {
+    const registered = routeRegistry.map((r) => `${r.method.toUpperCase()} ${r.path}`).sort();
+    expect(Object.keys(matrix).sort()).toEqual(registered);
+  });
+
+  it('gives every route an allowed actor, and every guarded route a denied one', () => {
+    for (const r of routeRegistry) {
+      const row = matrix[`${r.method.toUpperCase()} ${r.path}`]!.expect;
+      const statuses = Object.values(row);
+      expect(statuses.some((s) => s < 401 || s > 404), `${r.path} has no allowed actor`).toBe(true);
+      if (r.action !== 'site.read') expect(statuses.some((s) => s >= 401 && s <= 404), `${r.path} has no denied actor`).toBe(true);
+    }
+  });
+
+  for (const route of routeRegistry) {
+    const key = `${route.method.toUpperCase()} ${route.path}`;
+    it(`${key}`, async () => {
+      const entry = matrix[key];
+      expect(entry, `matrix row for ${key}`).toBeDefined();
+      const world = await makeWorld();
+      const got: Partial<Row> = {};
+      for (const actor of ACTORS) {
+        const { path, body } = entry!.request(world);
+        const res = await world.clients[actor].request(route.method.toUpperCase(), path, body);
+        got[actor] = res.status;
+        if (res.status >= 400) expect(res.body, `${key} as ${actor}: JSON error body`).toHaveProperty('error.code');
+      }
+      expect(got).toEqual(entry!.expect);
+    });
+  }
+
+  it('hides a private build from everyone outside its team: 404, admins included', async () => {
+    const world = await makeWorld('private');
+    const path = `/api/builds/${world.ids.buildA}/members`;
+    const statuses: Partial<Row> = {};
+    for (const actor of ACTORS) statuses[actor] = (await world.clients[actor].get(path)).status;
+    expect(statuses).toEqual({ visitor: 404, follower: 404, editor: 200, owner: 200, otherOwner: 404, sponsorMember: 404, admin: 404 });
+    const invitations = await world.clients.admin.get(`/api/builds/${world.ids.buildA}/invitations`);
+    expect(invitations.status).toBe(404);
+    expect(invitations.body.error.code).toBe('not_found');
+  });
+});
