@@ -12,11 +12,16 @@ export const DEV_DATABASE_URL_FILE = path.join(root, '.data', 'dev-database-url'
 
 async function main(handle: string | undefined) {
   if (!handle) throw new Error('usage: npm run admin:grant <handle>');
-  const url = process.env.DATABASE_URL ?? (existsSync(DEV_DATABASE_URL_FILE) ? readFileSync(DEV_DATABASE_URL_FILE, 'utf8').trim() : undefined);
+  const url =
+    process.env.DATABASE_URL ?? (existsSync(DEV_DATABASE_URL_FILE) ? readFileSync(DEV_DATABASE_URL_FILE, 'utf8').trim() : undefined);
   if (!url) throw new Error('Set DATABASE_URL, or run npm start first');
   const { db, destroy } = createDb(url, { max: 1 });
   try {
-    const user = await db.selectFrom('users').select(['id', 'handle']).where(sql`lower(handle)`, '=', handle.toLowerCase()).executeTakeFirst();
+    const user = await db
+      .selectFrom('users')
+      .select(['id', 'handle'])
+      .where(sql`lower(handle)`, '=', handle.toLowerCase())
+      .executeTakeFirst();
     if (!user) throw new Error(`No account with handle "${handle}"`);
     await applyAccountAction(db, null, user.id, 'grant-admin');
     console.log(`${user.handle} is now a site admin.`);

@@ -57,7 +57,9 @@ async function main() {
   log('');
   log(`app:          http://127.0.0.1:${APP_PORT}`);
   log(`mail inbox:   ${services.urls.inbox}`);
-  log(`demo sign-in: ${services.urls.github} (the GitHub stand-in with the invented demo accounts)`);
+  log(
+    `sign in:      http://127.0.0.1:${APP_PORT}/sign-in ("Continue with GitHub" opens the stand-in at ${services.urls.github}; pick a demo account)`,
+  );
   log('Ctrl-C stops the server, the fakes and PostgreSQL.');
 }
 

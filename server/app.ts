@@ -19,6 +19,10 @@ function trustProxy(value: string): boolean | number | string {
   return value;
 }
 
+function avatarOrigin(config: AppDeps['config']): string {
+  return config.GITHUB_USER_PROFILE_URL ? new URL(config.GITHUB_USER_PROFILE_URL).origin : 'https://avatars.githubusercontent.com';
+}
+
 /** Builds the Express app from its dependencies; listening is the caller's business. */
 export function createApp(deps: AppDeps): Express {
   const { config } = deps;
@@ -34,7 +38,8 @@ export function createApp(deps: AppDeps): Express {
           // No inline script anywhere: hydration data travels as JSON in a non-executable tag.
           'script-src': ["'self'"],
           'style-src': ["'self'"],
-          'img-src': ["'self'", 'data:', 'blob:'],
+          // Avatars come from the sign-in provider (GitHub's avatar host, or the local stand-in).
+          'img-src': ["'self'", 'data:', 'blob:', avatarOrigin(config)],
           'font-src': ["'self'"],
           'connect-src': ["'self'"],
           'form-action': ["'self'"],

@@ -28,7 +28,17 @@ export function createDeps(config: Config, logger: Logger, overrides: { outbox?:
     messageIdDomain: new URL(config.PUBLIC_URL).hostname,
     ...overrides.outbox,
   });
-  const deps: AppDeps = { config, db, pool, rateLimits: createRateLimits(pool, config.RATE_LIMIT_MULTIPLIER), storage, mailer, queue, outbox, logger };
+  const deps: AppDeps = {
+    config,
+    db,
+    pool,
+    rateLimits: createRateLimits(pool, config.RATE_LIMIT_MULTIPLIER),
+    storage,
+    mailer,
+    queue,
+    outbox,
+    logger,
+  };
   registerJobs(deps);
   return {
     ...deps,

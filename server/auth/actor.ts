@@ -49,7 +49,8 @@ export function actorMiddleware(db: Db) {
     let actor: Actor = null;
     if (userId) {
       actor = await loadActor(db, userId);
-      if (!actor) await new Promise<void>((resolve, reject) => req.session.destroy((err) => (err ? reject(err) : resolve())));
+      // Regenerate rather than destroy: the old row goes, and later middleware (CSRF) still has a session.
+      if (!actor) await new Promise<void>((resolve, reject) => req.session.regenerate((err) => (err ? reject(err) : resolve())));
     }
     (req as Request & { actor?: Actor }).actor = actor;
     next();

@@ -5,9 +5,7 @@ import type { Actor, SignedIn } from './actor';
 export type { Actor } from './actor';
 
 /** What an action is about, loaded by the route before the policy decides. */
-export type Resource =
-  | { kind: 'build'; id: number; visibility: BuildVisibility }
-  | { kind: 'account'; userId: number };
+export type Resource = { kind: 'build'; id: number; visibility: BuildVisibility } | { kind: 'account'; userId: number };
 
 type Rule = {
   /** Visitors get 401 (sign in) rather than 403 when denied. */

@@ -1,4 +1,5 @@
 import connectPgSimple from 'connect-pg-simple';
+import type { Request } from 'express';
 import session from 'express-session';
 import type pg from 'pg';
 import type { Config } from '../config';
@@ -27,7 +28,7 @@ export function sessionMiddleware(pool: pg.Pool, config: Config) {
 }
 
 /** Starts a fresh session for a signed-in account (a new id, so a planted one is useless). */
-export function signInSession(req: import('express').Request, userId: number): Promise<void> {
+export function signInSession(req: Request, userId: number): Promise<void> {
   return new Promise((resolve, reject) => {
     req.session.regenerate((err) => {
       if (err) return reject(err);
@@ -38,6 +39,6 @@ export function signInSession(req: import('express').Request, userId: number): P
 }
 
 /** Ends the session and its row. */
-export function endSession(req: import('express').Request): Promise<void> {
+export function endSession(req: Request): Promise<void> {
   return new Promise((resolve, reject) => req.session.destroy((err) => (err ? reject(err) : resolve())));
 }

@@ -22,7 +22,16 @@ export function createRateLimits(pool: pg.Pool, multiplier = 1): RateLimits {
   for (const [name, opts] of Object.entries(RATE_LIMITS) as Array<[RateLimitName, { points: number; duration: number }]>) {
     limiters.set(
       name,
-      new RateLimiterPostgres({ storeClient: pool, storeType: 'pool', tableName: 'rate_limits', tableCreated: true, clearExpiredByTimeout: false, keyPrefix: name, duration: opts.duration, points: opts.points * multiplier }),
+      new RateLimiterPostgres({
+        storeClient: pool,
+        storeType: 'pool',
+        tableName: 'rate_limits',
+        tableCreated: true,
+        clearExpiredByTimeout: false,
+        keyPrefix: name,
+        duration: opts.duration,
+        points: opts.points * multiplier,
+      }),
     );
   }
   return {
@@ -32,7 +41,9 @@ export function createRateLimits(pool: pg.Pool, multiplier = 1): RateLimits {
       } catch (err) {
         if (err instanceof RateLimiterRes) {
           const seconds = Math.max(1, Math.ceil(err.msBeforeNext / 1000));
-          throw new HttpError(429, 'rate_limited', `Too many attempts; try again in ${seconds} s`, undefined, { 'retry-after': String(seconds) });
+          throw new HttpError(429, 'rate_limited', `Too many attempts; try again in ${seconds} s`, undefined, {
+            'retry-after': String(seconds),
+          });
         }
         throw err;
       }

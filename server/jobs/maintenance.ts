@@ -10,9 +10,15 @@ export function registerMaintenance(deps: AppDeps): void {
     cron: '17 * * * *',
     retryLimit: 1,
     handler: async () => {
-      await deps.db.deleteFrom('sessions').where('expire', '<', sql<Date>`now()`).execute();
+      await deps.db
+        .deleteFrom('sessions')
+        .where('expire', '<', sql<Date>`now()`)
+        .execute();
       await deps.db.deleteFrom('rate_limits').where('expire', '<', Date.now()).execute();
-      await deps.db.deleteFrom('sign_in_tokens').where('expires_at', '<', sql<Date>`now() - interval '1 day'`).execute();
+      await deps.db
+        .deleteFrom('sign_in_tokens')
+        .where('expires_at', '<', sql<Date>`now() - interval '1 day'`)
+        .execute();
     },
   });
 }

@@ -4,7 +4,14 @@ import { signedIn } from '../auth/policy';
 import { buildResource, invitationBuildResource } from '../auth/resources';
 import { HttpError } from '../http/http-error';
 import { defineRoute } from '../http/registry';
-import { acceptInvitation, inviteEditor, listInvitations, lookupInvitation, resendInvitation, revokeInvitation } from '../services/invitations';
+import {
+  acceptInvitation,
+  inviteEditor,
+  listInvitations,
+  lookupInvitation,
+  resendInvitation,
+  revokeInvitation,
+} from '../services/invitations';
 
 const buildParams = z.object({ buildId: idParam });
 const invitationParams = z.object({ invitationId: idParam });
@@ -27,7 +34,9 @@ export const invitationRoutes = [
         .orderBy('m.role', 'desc')
         .orderBy('u.display_name')
         .execute();
-      return { items: rows.map((r) => ({ userId: r.id, handle: r.handle, displayName: r.display_name, avatarUrl: r.avatar_url, role: r.role })) };
+      return {
+        items: rows.map((r) => ({ userId: r.id, handle: r.handle, displayName: r.display_name, avatarUrl: r.avatar_url, role: r.role })),
+      };
     },
   }),
   defineRoute({
@@ -38,7 +47,12 @@ export const invitationRoutes = [
     params: memberParams,
     resource: buildResource,
     handler: async ({ deps, params, res }) => {
-      const m = await deps.db.selectFrom('build_members').select(['id', 'role']).where('build_id', '=', params.buildId).where('user_id', '=', params.userId).executeTakeFirst();
+      const m = await deps.db
+        .selectFrom('build_members')
+        .select(['id', 'role'])
+        .where('build_id', '=', params.buildId)
+        .where('user_id', '=', params.userId)
+        .executeTakeFirst();
       if (!m) throw new HttpError(404, 'not_found', 'Not on this build team');
       if (m.role === 'owner') throw new HttpError(409, 'owner_cannot_leave', 'The owner cannot be removed; transfer the build first');
       await deps.db.deleteFrom('build_members').where('id', '=', m.id).execute();

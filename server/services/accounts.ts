@@ -16,11 +16,19 @@ export interface GithubProfile {
 
 /** Turns a login or an e-mail's local part into a free handle (`jun-halloway`, `jun-halloway-2`). */
 async function freeHandle(db: Trx, wanted: string): Promise<string> {
-  let base = wanted.toLowerCase().replace(/[^a-z0-9-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 32);
+  let base = wanted
+    .toLowerCase()
+    .replace(/[^a-z0-9-]+/g, '-')
+    .replace(/^-+|-+$/g, '')
+    .slice(0, 32);
   if (base.length < 2) base = `member-${base}`.replace(/-+$/, '');
   for (let n = 1; n < 1000; n += 1) {
     const candidate = n === 1 ? base : `${base}-${n}`;
-    const taken = await db.selectFrom('users').select('id').where(sql`lower(handle)`, '=', candidate).executeTakeFirst();
+    const taken = await db
+      .selectFrom('users')
+      .select('id')
+      .where(sql`lower(handle)`, '=', candidate)
+      .executeTakeFirst();
     if (!taken) return candidate;
   }
   throw new Error(`no free handle for ${wanted}`);
@@ -33,20 +41,41 @@ function refuseSuspended(user: { suspended_at: Date | null; deleted_at: Date | n
 /** First GitHub sign-in creates the account (or links one with the same verified e-mail); later ones update its display fields. */
 export async function signInWithGithub(db: Db, p: GithubProfile): Promise<number> {
   return db.transaction().execute(async (trx) => {
-    const identity = await trx.selectFrom('identities').select('user_id').where('provider', '=', 'github').where('provider_uid', '=', p.githubId).executeTakeFirst();
+    const identity = await trx
+      .selectFrom('identities')
+      .select('user_id')
+      .where('provider', '=', 'github')
+      .where('provider_uid', '=', p.githubId)
+      .executeTakeFirst();
     let userId = identity?.user_id;
     if (!userId && p.email) {
-      userId = (await trx.selectFrom('users').select('id').where(sql`lower(email)`, '=', p.email.toLowerCase()).executeTakeFirst())?.id;
+      userId = (
+        await trx
+          .selectFrom('users')
+          .select('id')
+          .where(sql`lower(email)`, '=', p.email.toLowerCase())
+          .executeTakeFirst()
+      )?.id;
     }
     if (!userId) {
       const created = await trx
         .insertInto('users')
-        .values({ handle: await freeHandle(trx, p.login), display_name: p.displayName || p.login, email: p.email?.toLowerCase() ?? null, avatar_url: p.avatarUrl })
+        .values({
+          handle: await freeHandle(trx, p.login),
+          display_name: p.displayName || p.login,
+          email: p.email?.toLowerCase() ?? null,
+          avatar_url: p.avatarUrl,
+        })
         .returning('id')
         .executeTakeFirstOrThrow();
       userId = created.id;
     }
-    const user = await trx.selectFrom('users').select(['suspended_at', 'deleted_at']).where('id', '=', userId).forUpdate().executeTakeFirstOrThrow();
+    const user = await trx
+      .selectFrom('users')
+      .select(['suspended_at', 'deleted_at'])
+      .where('id', '=', userId)
+      .forUpdate()
+      .executeTakeFirstOrThrow();
     refuseSuspended(user);
     await trx
       .updateTable('users')
@@ -61,8 +90,21 @@ export async function signInWithGithub(db: Db, p: GithubProfile): Promise<number
 /** The account behind an e-mail address proven by a sign-in link, created on first use. */
 export async function signInWithEmail(trx: Trx, email: string): Promise<number> {
   const address = email.toLowerCase();
-  const identity = await trx.selectFrom('identities').select('user_id').where('provider', '=', 'email').where('provider_uid', '=', address).executeTakeFirst();
-  let userId = identity?.user_id ?? (await trx.selectFrom('users').select('id').where(sql`lower(email)`, '=', address).executeTakeFirst())?.id;
+  const identity = await trx
+    .selectFrom('identities')
+    .select('user_id')
+    .where('provider', '=', 'email')
+    .where('provider_uid', '=', address)
+    .executeTakeFirst();
+  let userId =
+    identity?.user_id ??
+    (
+      await trx
+        .selectFrom('users')
+        .select('id')
+        .where(sql`lower(email)`, '=', address)
+        .executeTakeFirst()
+    )?.id;
   if (!userId) {
     const local = address.split('@')[0] ?? 'member';
     userId = (
@@ -97,8 +139,20 @@ export async function getAccount(db: Db, userId: number): Promise<Account | null
   if (!user) return null;
   const [identities, builds, sponsors] = await Promise.all([
     db.selectFrom('identities').select('provider').where('user_id', '=', userId).execute(),
-    db.selectFrom('build_members as m').innerJoin('builds as b', 'b.id', 'm.build_id').select(['b.id', 'b.title', 'b.slug', 'm.role']).where('m.user_id', '=', userId).orderBy('b.title').execute(),
-    db.selectFrom('sponsor_members as m').innerJoin('sponsors as s', 's.id', 'm.sponsor_id').select(['s.id', 's.name', 's.slug']).where('m.user_id', '=', userId).orderBy('s.name').execute(),
+    db
+      .selectFrom('build_members as m')
+      .innerJoin('builds as b', 'b.id', 'm.build_id')
+      .select(['b.id', 'b.title', 'b.slug', 'm.role'])
+      .where('m.user_id', '=', userId)
+      .orderBy('b.title')
+      .execute(),
+    db
+      .selectFrom('sponsor_members as m')
+      .innerJoin('sponsors as s', 's.id', 'm.sponsor_id')
+      .select(['s.id', 's.name', 's.slug'])
+      .where('m.user_id', '=', userId)
+      .orderBy('s.name')
+      .execute(),
   ]);
   return {
     id: user.id,

@@ -5,10 +5,26 @@ import { HttpError } from '../http/http-error';
 import { endSessionsOf } from './accounts';
 
 const columns = ['id', 'handle', 'display_name', 'email', 'is_admin', 'suspended_at', 'created_at'] as const;
-type Row = { id: number; handle: string; display_name: string; email: string | null; is_admin: boolean; suspended_at: Date | null; created_at: Date };
+type Row = {
+  id: number;
+  handle: string;
+  display_name: string;
+  email: string | null;
+  is_admin: boolean;
+  suspended_at: Date | null;
+  created_at: Date;
+};
 
 function present(r: Row): AdminAccount {
-  return { id: r.id, handle: r.handle, displayName: r.display_name, email: r.email, isAdmin: r.is_admin, suspendedAt: r.suspended_at?.toISOString() ?? null, createdAt: r.created_at.toISOString() };
+  return {
+    id: r.id,
+    handle: r.handle,
+    displayName: r.display_name,
+    email: r.email,
+    isAdmin: r.is_admin,
+    suspendedAt: r.suspended_at?.toISOString() ?? null,
+    createdAt: r.created_at.toISOString(),
+  };
 }
 
 /** Accounts for the admin list, searched by handle, name or e-mail. */
@@ -19,7 +35,13 @@ export async function listAccounts(db: Db, q: { q?: string; page: number; perPag
     base = base.where((eb) => eb.or([eb('handle', 'ilike', like), eb('display_name', 'ilike', like), eb('email', 'ilike', like)]));
   }
   const [rows, count] = await Promise.all([
-    base.select(columns).orderBy('created_at', 'desc').orderBy('id', 'desc').limit(q.perPage).offset((q.page - 1) * q.perPage).execute(),
+    base
+      .select(columns)
+      .orderBy('created_at', 'desc')
+      .orderBy('id', 'desc')
+      .limit(q.perPage)
+      .offset((q.page - 1) * q.perPage)
+      .execute(),
     base.select((eb) => eb.fn.countAll<number>().as('n')).executeTakeFirstOrThrow(),
   ]);
   return { items: rows.map(present), page: q.page, perPage: q.perPage, total: count.n };
@@ -33,7 +55,12 @@ const changes: Record<AdminAccountAction, { set: Record<string, unknown>; audit:
 };
 
 /** Suspends, restores, grants or revokes admin; recorded in audit_events with who and when. */
-export async function applyAccountAction(db: Db, actorId: number | null, userId: number, action: AdminAccountAction): Promise<AdminAccount> {
+export async function applyAccountAction(
+  db: Db,
+  actorId: number | null,
+  userId: number,
+  action: AdminAccountAction,
+): Promise<AdminAccount> {
   if (actorId === userId && (action === 'suspend' || action === 'revoke-admin')) {
     throw new HttpError(409, 'cannot_change_self', 'Ask another admin to do this to your own account');
   }
@@ -47,7 +74,15 @@ export async function applyAccountAction(db: Db, actorId: number | null, userId:
       .executeTakeFirst();
     if (!row) throw new HttpError(404, 'not_found', 'No such account');
     if (action === 'suspend') await endSessionsOf(trx, userId);
-    await trx.insertInto('audit_events').values({ actor_id: actorId, action: changes[action].audit, subject_user_id: userId, details: JSON.stringify({ via: actorId ? 'admin screen' : 'operator command' }) }).execute();
+    await trx
+      .insertInto('audit_events')
+      .values({
+        actor_id: actorId,
+        action: changes[action].audit,
+        subject_user_id: userId,
+        details: JSON.stringify({ via: actorId ? 'admin screen' : 'operator command' }),
+      })
+      .execute();
     return present(row);
   });
 }

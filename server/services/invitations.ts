@@ -16,7 +16,15 @@ function status(r: Pick<Row, 'accepted_at' | 'revoked_at' | 'expires_at'>): Invi
 
 /** Maps an invitation row to the API shape. */
 export function presentInvitation(r: Row): Invitation {
-  return { id: r.id, kind: r.kind, email: r.email, status: status(r), expiresAt: new Date(r.expires_at).toISOString(), lastSentAt: new Date(r.last_sent_at).toISOString(), createdAt: new Date(r.created_at).toISOString() };
+  return {
+    id: r.id,
+    kind: r.kind,
+    email: r.email,
+    status: status(r),
+    expiresAt: new Date(r.expires_at).toISOString(),
+    lastSentAt: new Date(r.last_sent_at).toISOString(),
+    createdAt: new Date(r.created_at).toISOString(),
+  };
 }
 
 async function sendInvitationEmail(deps: AppDeps, trx: AppDeps['db'], to: string, token: string, buildTitle: string, inviter: string) {
@@ -25,7 +33,13 @@ async function sendInvitationEmail(deps: AppDeps, trx: AppDeps['db'], to: string
     to,
     kind: 'invitation',
     subject: `${inviter} invites you to help edit "${buildTitle}" on Rivet & Reel`,
-    text: [`${inviter} would like you to help edit the build "${buildTitle}" on Rivet & Reel.`, '', `Open this link to accept: ${link}`, '', `It works once and expires in ${INVITATION_DAYS} days.`].join('\n'),
+    text: [
+      `${inviter} would like you to help edit the build "${buildTitle}" on Rivet & Reel.`,
+      '',
+      `Open this link to accept: ${link}`,
+      '',
+      `It works once and expires in ${INVITATION_DAYS} days.`,
+    ].join('\n'),
   });
 }
 
@@ -41,12 +55,29 @@ export async function inviteEditor(deps: AppDeps, inviterId: number, buildId: nu
       .where('m.build_id', '=', buildId)
       .where(sql`lower(u.email)`, '=', email)
       .executeTakeFirst();
-    if (already) throw new HttpError(409, 'already_member', 'That address already belongs to someone on this build', { email: ['already on the build team'] });
-    await trx.updateTable('invitations').set({ revoked_at: sql<Date>`now()` }).where('build_id', '=', buildId).where('email', '=', email).where('accepted_at', 'is', null).where('revoked_at', 'is', null).execute();
+    if (already)
+      throw new HttpError(409, 'already_member', 'That address already belongs to someone on this build', {
+        email: ['already on the build team'],
+      });
+    await trx
+      .updateTable('invitations')
+      .set({ revoked_at: sql<Date>`now()` })
+      .where('build_id', '=', buildId)
+      .where('email', '=', email)
+      .where('accepted_at', 'is', null)
+      .where('revoked_at', 'is', null)
+      .execute();
     const { token, hash } = newToken();
     const row = await trx
       .insertInto('invitations')
-      .values({ kind: 'build-editor', build_id: buildId, email, token_hash: hash, invited_by: inviterId, expires_at: sql<Date>`now() + make_interval(days => ${INVITATION_DAYS})` })
+      .values({
+        kind: 'build-editor',
+        build_id: buildId,
+        email,
+        token_hash: hash,
+        invited_by: inviterId,
+        expires_at: sql<Date>`now() + make_interval(days => ${INVITATION_DAYS})`,
+      })
       .returningAll()
       .executeTakeFirstOrThrow();
     await sendInvitationEmail(deps, trx, email, token, build.title, inviter.display_name);
@@ -55,7 +86,13 @@ export async function inviteEditor(deps: AppDeps, inviterId: number, buildId: nu
 }
 
 export async function listInvitations(deps: AppDeps, buildId: number): Promise<Invitation[]> {
-  const rows = await deps.db.selectFrom('invitations').selectAll().where('build_id', '=', buildId).orderBy('created_at', 'desc').limit(200).execute();
+  const rows = await deps.db
+    .selectFrom('invitations')
+    .selectAll()
+    .where('build_id', '=', buildId)
+    .orderBy('created_at', 'desc')
+    .limit(200)
+    .execute();
   return rows.map(presentInvitation);
 }
 
@@ -65,7 +102,9 @@ export async function resendInvitation(deps: AppDeps, invitationId: number): Pro
     const inv = await trx.selectFrom('invitations').selectAll().where('id', '=', invitationId).forUpdate().executeTakeFirstOrThrow();
     if (inv.accepted_at || inv.revoked_at) throw new HttpError(409, 'invitation_closed', 'This invitation was already accepted or revoked');
     const build = await trx.selectFrom('builds').select('title').where('id', '=', inv.build_id!).executeTakeFirstOrThrow();
-    const inviter = inv.invited_by ? await trx.selectFrom('users').select('display_name').where('id', '=', inv.invited_by).executeTakeFirst() : undefined;
+    const inviter = inv.invited_by
+      ? await trx.selectFrom('users').select('display_name').where('id', '=', inv.invited_by).executeTakeFirst()
+      : undefined;
     const { token, hash } = newToken();
     const row = await trx
       .updateTable('invitations')
@@ -79,7 +118,13 @@ export async function resendInvitation(deps: AppDeps, invitationId: number): Pro
 }
 
 export async function revokeInvitation(deps: AppDeps, invitationId: number): Promise<void> {
-  const r = await deps.db.updateTable('invitations').set({ revoked_at: sql<Date>`now()` }).where('id', '=', invitationId).where('accepted_at', 'is', null).where('revoked_at', 'is', null).executeTakeFirst();
+  const r = await deps.db
+    .updateTable('invitations')
+    .set({ revoked_at: sql<Date>`now()` })
+    .where('id', '=', invitationId)
+    .where('accepted_at', 'is', null)
+    .where('revoked_at', 'is', null)
+    .executeTakeFirst();
   if (!r.numUpdatedRows) throw new HttpError(409, 'invitation_closed', 'This invitation was already accepted or revoked');
 }
 
@@ -89,21 +134,48 @@ export async function lookupInvitation(deps: AppDeps, token: string): Promise<In
     .selectFrom('invitations as i')
     .innerJoin('builds as b', 'b.id', 'i.build_id')
     .leftJoin('users as u', 'u.id', 'i.invited_by')
-    .select(['i.kind', 'i.email', 'i.accepted_at', 'i.revoked_at', 'i.expires_at', 'b.id as target_id', 'b.title as target_title', 'u.display_name as inviter'])
+    .select([
+      'i.kind',
+      'i.email',
+      'i.accepted_at',
+      'i.revoked_at',
+      'i.expires_at',
+      'b.id as target_id',
+      'b.title as target_title',
+      'u.display_name as inviter',
+    ])
     .where('i.token_hash', '=', hashToken(token))
     .executeTakeFirst();
   if (!row) throw new HttpError(404, 'not_found', 'This invitation link is not valid');
-  return { kind: row.kind, email: row.email, status: status(row), target: { id: row.target_id, title: row.target_title }, invitedBy: row.inviter };
+  return {
+    kind: row.kind,
+    email: row.email,
+    status: status(row),
+    target: { id: row.target_id, title: row.target_title },
+    invitedBy: row.inviter,
+  };
 }
 
 /** Accepts an invitation for the signed-in account: it joins the build team as an editor. */
-export async function acceptInvitation(deps: AppDeps, userId: number, token: string): Promise<{ kind: Invitation['kind']; targetId: number }> {
+export async function acceptInvitation(
+  deps: AppDeps,
+  userId: number,
+  token: string,
+): Promise<{ kind: Invitation['kind']; targetId: number }> {
   return deps.db.transaction().execute(async (trx) => {
     const inv = await trx.selectFrom('invitations').selectAll().where('token_hash', '=', hashToken(token)).forUpdate().executeTakeFirst();
     if (!inv) throw new HttpError(404, 'not_found', 'This invitation link is not valid');
     if (status(inv) !== 'pending') throw new HttpError(409, 'invitation_closed', `This invitation was ${status(inv)}`);
-    await trx.insertInto('build_members').values({ build_id: inv.build_id!, user_id: userId, role: 'editor' }).onConflict((oc) => oc.columns(['build_id', 'user_id']).doNothing()).execute();
-    await trx.updateTable('invitations').set({ accepted_at: sql<Date>`now()`, accepted_by: userId }).where('id', '=', inv.id).execute();
+    await trx
+      .insertInto('build_members')
+      .values({ build_id: inv.build_id!, user_id: userId, role: 'editor' })
+      .onConflict((oc) => oc.columns(['build_id', 'user_id']).doNothing())
+      .execute();
+    await trx
+      .updateTable('invitations')
+      .set({ accepted_at: sql<Date>`now()`, accepted_by: userId })
+      .where('id', '=', inv.id)
+      .execute();
     return { kind: inv.kind, targetId: inv.build_id! };
   });
 }

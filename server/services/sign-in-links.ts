@@ -13,7 +13,12 @@ export async function requestSignInLink(deps: AppDeps, email: string, returnTo: 
   await deps.db.transaction().execute(async (trx) => {
     await trx
       .insertInto('sign_in_tokens')
-      .values({ token_hash: hash, email, return_to: returnTo ?? null, expires_at: sql<Date>`now() + make_interval(mins => ${SIGN_IN_LINK_MINUTES})` })
+      .values({
+        token_hash: hash,
+        email,
+        return_to: returnTo ?? null,
+        expires_at: sql<Date>`now() + make_interval(mins => ${SIGN_IN_LINK_MINUTES})`,
+      })
       .execute();
     await deps.outbox.enqueue(trx, {
       to: email,
@@ -41,8 +46,15 @@ export async function redeemSignInLink(deps: AppDeps, token: string): Promise<{ 
       .where('expires_at', '>', sql<Date>`now()`)
       .forUpdate()
       .executeTakeFirst();
-    if (!row) throw new HttpError(400, 'link_invalid', 'This sign-in link was already used or has expired; ask for a new one', { token: ['used or expired'] });
-    await trx.updateTable('sign_in_tokens').set({ used_at: sql<Date>`now()` }).where('id', '=', row.id).execute();
+    if (!row)
+      throw new HttpError(400, 'link_invalid', 'This sign-in link was already used or has expired; ask for a new one', {
+        token: ['used or expired'],
+      });
+    await trx
+      .updateTable('sign_in_tokens')
+      .set({ used_at: sql<Date>`now()` })
+      .where('id', '=', row.id)
+      .execute();
     const userId = await signInWithEmail(trx, row.email);
     return { userId, returnTo: row.return_to ?? '/' };
   });

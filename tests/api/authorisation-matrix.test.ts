@@ -23,9 +23,25 @@ interface World {
 /** Expected status per actor; `all(s)` for routes anyone may call. */
 const all = (s: number): Row => ({ visitor: s, follower: s, editor: s, owner: s, otherOwner: s, sponsorMember: s, admin: s });
 const signedIn = (s: number): Row => ({ ...all(s), visitor: 401 });
-const ownerOnly = (s: number): Row => ({ visitor: 401, follower: 403, editor: 403, owner: s, otherOwner: 403, sponsorMember: 403, admin: 403 });
+const ownerOnly = (s: number): Row => ({
+  visitor: 401,
+  follower: 403,
+  editor: 403,
+  owner: s,
+  otherOwner: 403,
+  sponsorMember: 403,
+  admin: 403,
+});
 const teamOnly = (s: number): Row => ({ ...ownerOnly(s), editor: s });
-const adminOnly = (s: number): Row => ({ visitor: 401, follower: 403, editor: 403, owner: 403, otherOwner: 403, sponsorMember: 403, admin: s });
+const adminOnly = (s: number): Row => ({
+  visitor: 401,
+  follower: 403,
+  editor: 403,
+  owner: 403,
+  otherOwner: 403,
+  sponsorMember: 403,
+  admin: s,
+});
 
 /** Route → request to send (with the world's ids) → expected statuses. Later issues add rows. */
 const matrix: Record<string, { request: (w: World) => { path: string; body?: unknown }; expect: Row }> = {
@@ -41,15 +57,27 @@ const matrix: Record<string, { request: (w: World) => { path: string; body?: unk
   // Owners must transfer or delete their builds first (409); everyone else's account goes (204).
   'DELETE /account': { request: () => ({ path: '/api/account' }), expect: { ...signedIn(204), owner: 409, otherOwner: 409 } },
   'GET /builds/:buildId/members': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}/members` }), expect: teamOnly(200) },
-  'DELETE /builds/:buildId/members/:userId': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}/members/${w.ids.editor}` }), expect: ownerOnly(204) },
+  'DELETE /builds/:buildId/members/:userId': {
+    request: (w) => ({ path: `/api/builds/${w.ids.buildA}/members/${w.ids.editor}` }),
+    expect: ownerOnly(204),
+  },
   'GET /builds/:buildId/invitations': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}/invitations` }), expect: ownerOnly(200) },
-  'POST /builds/:buildId/invitations': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}/invitations`, body: { email: 'nope' } }), expect: ownerOnly(400) },
-  'POST /invitations/:invitationId/resend': { request: (w) => ({ path: `/api/invitations/${w.ids.invitation}/resend`, body: { junk: 1 } }), expect: ownerOnly(400) },
+  'POST /builds/:buildId/invitations': {
+    request: (w) => ({ path: `/api/builds/${w.ids.buildA}/invitations`, body: { email: 'nope' } }),
+    expect: ownerOnly(400),
+  },
+  'POST /invitations/:invitationId/resend': {
+    request: (w) => ({ path: `/api/invitations/${w.ids.invitation}/resend`, body: { junk: 1 } }),
+    expect: ownerOnly(400),
+  },
   'DELETE /invitations/:invitationId': { request: (w) => ({ path: `/api/invitations/${w.ids.invitation}` }), expect: ownerOnly(204) },
   'POST /invitations/lookup': { request: () => ({ path: '/api/invitations/lookup', body: { token: 'short' } }), expect: all(400) },
   'POST /invitations/accept': { request: () => ({ path: '/api/invitations/accept', body: { token: 'short' } }), expect: signedIn(400) },
   'GET /admin/accounts': { request: () => ({ path: '/api/admin/accounts' }), expect: adminOnly(200) },
-  'POST /admin/accounts/:userId/actions': { request: (w) => ({ path: `/api/admin/accounts/${w.ids.follower}/actions`, body: { action: 'bogus' } }), expect: adminOnly(400) },
+  'POST /admin/accounts/:userId/actions': {
+    request: (w) => ({ path: `/api/admin/accounts/${w.ids.follower}/actions`, body: { action: 'bogus' } }),
+    expect: adminOnly(400),
+  },
 };
 
 let app: TestApp;
@@ -78,11 +106,22 @@ async function makeWorld(visibility: 'public' | 'unlisted' | 'private' = 'public
       { build_id: buildB.id, user_id: users.otherOwner.id, role: 'owner' },
     ])
     .execute();
-  const sponsor = await db.insertInto('sponsors').values({ slug: `sponsor-${buildA.id}`, name: 'Invented Parts Co-op' }).returning('id').executeTakeFirstOrThrow();
+  const sponsor = await db
+    .insertInto('sponsors')
+    .values({ slug: `sponsor-${buildA.id}`, name: 'Invented Parts Co-op' })
+    .returning('id')
+    .executeTakeFirstOrThrow();
   await db.insertInto('sponsor_members').values({ sponsor_id: sponsor.id, user_id: users.sponsorMember.id }).execute();
   const invitation = await db
     .insertInto('invitations')
-    .values({ kind: 'build-editor', build_id: buildA.id, email: `invitee-${buildA.id}@example.test`, token_hash: hashToken(`matrix-token-${buildA.id}`), invited_by: users.owner.id, expires_at: sql<Date>`now() + interval '7 days'` })
+    .values({
+      kind: 'build-editor',
+      build_id: buildA.id,
+      email: `invitee-${buildA.id}@example.test`,
+      token_hash: hashToken(`matrix-token-${buildA.id}`),
+      invited_by: users.owner.id,
+      expires_at: sql<Date>`now() + interval '7 days'`,
+    })
     .returning('id')
     .executeTakeFirstOrThrow();
 
@@ -104,8 +143,15 @@ describe('authorisation matrix', () => {
     for (const r of routeRegistry) {
       const row = matrix[`${r.method.toUpperCase()} ${r.path}`]!.expect;
       const statuses = Object.values(row);
-      expect(statuses.some((s) => s < 401 || s > 404), `${r.path} has no allowed actor`).toBe(true);
-      if (r.action !== 'site.read') expect(statuses.some((s) => s >= 401 && s <= 404), `${r.path} has no denied actor`).toBe(true);
+      expect(
+        statuses.some((s) => s < 401 || s > 404),
+        `${r.path} has no allowed actor`,
+      ).toBe(true);
+      if (r.action !== 'site.read')
+        expect(
+          statuses.some((s) => s >= 401 && s <= 404),
+          `${r.path} has no denied actor`,
+        ).toBe(true);
     }
   });
 

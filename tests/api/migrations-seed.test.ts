@@ -18,7 +18,11 @@ afterAll(async () => {
 });
 
 async function schema(): Promise<string[]> {
-  const r = await sql<{ c: string }>`select table_name || '.' || column_name as c from information_schema.columns where table_schema = 'public' order by 1`.execute(handle.db);
+  const r = await sql<{
+    c: string;
+  }>`select table_name || '.' || column_name as c from information_schema.columns where table_schema = 'public' order by 1`.execute(
+    handle.db,
+  );
   return r.rows.map((t) => t.c);
 }
 
@@ -28,7 +32,8 @@ describe('migrations', () => {
     expect(up.results?.length).toBeGreaterThan(0);
     expect(up.results?.every((r) => r.status === 'Success')).toBe(true);
     const full = await schema();
-    for (const table of ['users', 'builds', 'episodes', 'sponsors', 'outbox_messages', 'seed_runs']) expect(full).toContain(`${table}.id`.replace('seed_runs.id', 'seed_runs.section'));
+    for (const table of ['users', 'builds', 'episodes', 'sponsors', 'outbox_messages', 'seed_runs'])
+      expect(full).toContain(`${table}.id`.replace('seed_runs.id', 'seed_runs.section'));
 
     const down = await migrateDown(handle.db);
     expect(down.results).toHaveLength(1);
@@ -54,7 +59,11 @@ describe('demo seed', () => {
   it('creates the demo data, and running it twice leaves the same rows', async () => {
     await runSeed(handle.db);
     const first = await snapshot();
-    expect(first.users.map((u) => u.handle).sort()).toEqual(loadDemoAccounts().map((a) => a.login).sort());
+    expect(first.users.map((u) => u.handle).sort()).toEqual(
+      loadDemoAccounts()
+        .map((a) => a.login)
+        .sort(),
+    );
     expect(first.users.filter((u) => u.is_admin).map((u) => u.handle)).toEqual(['site-admin']);
     expect(first.builds.length).toBeGreaterThan(0);
     expect(first.episodes.length).toBeGreaterThan(0);

@@ -18,12 +18,23 @@ export class TestClient {
   constructor(readonly baseUrl: string) {}
 
   /** Sends a request; mutations carry the session's CSRF token unless `csrf: false`. */
-  async request<T = any>(method: string, path: string, body?: unknown, opts: { csrf?: boolean; headers?: Record<string, string> } = {}): Promise<TestResponse<T>> {
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- response bodies are read loosely in tests
+  async request<T = any>(
+    method: string,
+    path: string,
+    body?: unknown,
+    opts: { csrf?: boolean; headers?: Record<string, string> } = {},
+  ): Promise<TestResponse<T>> {
     const headers: Record<string, string> = { accept: 'application/json', ...opts.headers };
     if (body !== undefined) headers['content-type'] = 'application/json';
     if (method !== 'GET' && opts.csrf !== false) headers[CSRF_HEADER] = await this.csrfToken();
     if (this.cookie) headers.cookie = this.cookie;
-    const res = await fetch(`${this.baseUrl}${path}`, { method, headers, body: body === undefined ? undefined : JSON.stringify(body), redirect: 'manual' });
+    const res = await fetch(`${this.baseUrl}${path}`, {
+      method,
+      headers,
+      body: body === undefined ? undefined : JSON.stringify(body),
+      redirect: 'manual',
+    });
     this.keepCookie(res);
     const text = await res.text();
     let parsed: unknown = text;
@@ -35,15 +46,19 @@ export class TestClient {
     return { status: res.status, body: parsed as T, headers: res.headers };
   }
 
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- response bodies are read loosely in tests
   get<T = any>(path: string) {
     return this.request<T>('GET', path);
   }
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- response bodies are read loosely in tests
   post<T = any>(path: string, body: unknown = {}, opts?: { csrf?: boolean }) {
     return this.request<T>('POST', path, body, opts);
   }
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- response bodies are read loosely in tests
   patch<T = any>(path: string, body: unknown, opts?: { csrf?: boolean }) {
     return this.request<T>('PATCH', path, body, opts);
   }
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- response bodies are read loosely in tests
   delete<T = any>(path: string, opts?: { csrf?: boolean }) {
     return this.request<T>('DELETE', path, undefined, opts);
   }
@@ -75,7 +90,10 @@ export class TestClient {
 /** Signs the client in as the account with this e-mail address, through a real sign-in link. */
 export async function signInByEmail(client: TestClient, db: Db, email: string): Promise<void> {
   const token = randomBytes(32).toString('base64url');
-  await db.insertInto('sign_in_tokens').values({ token_hash: hashToken(token), email, expires_at: sql<Date>`now() + interval '10 minutes'` }).execute();
+  await db
+    .insertInto('sign_in_tokens')
+    .values({ token_hash: hashToken(token), email, expires_at: sql<Date>`now() + interval '10 minutes'` })
+    .execute();
   const res = await client.post('/api/sign-in-links/redeem', { token });
   if (res.status !== 200) throw new Error(`sign-in as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
   client.forgetCsrf();

@@ -31,3 +31,13 @@ export async function createTestDatabase({ empty = false }: { empty?: boolean } 
     drop: () => admin(async (c) => void (await c.query(`drop database if exists "${name}" with (force)`))),
   };
 }
+
+/** A handle on a test database that already exists (kept by an earlier app); drop() removes it. */
+export function existingTestDatabase(url: string): TestDatabase {
+  const name = decodeURIComponent(new URL(url).pathname.slice(1));
+  return {
+    url,
+    name,
+    drop: () => admin(async (c) => void (await c.query(`drop database if exists "${name}" with (force)`))),
+  };
+}

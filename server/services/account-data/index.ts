@@ -16,9 +16,18 @@ export async function exportAccountData(db: Db, userId: number): Promise<Record<
 /** "Delete my account": refused while it owns builds; otherwise every section erases its part. */
 export async function deleteAccount(db: Db, userId: number): Promise<void> {
   await db.transaction().execute(async (trx) => {
-    const owned = await trx.selectFrom('build_members').select('build_id').where('user_id', '=', userId).where('role', '=', 'owner').execute();
+    const owned = await trx
+      .selectFrom('build_members')
+      .select('build_id')
+      .where('user_id', '=', userId)
+      .where('role', '=', 'owner')
+      .execute();
     if (owned.length) {
-      throw new HttpError(409, 'owns_builds', `You still own ${owned.length} build${owned.length === 1 ? '' : 's'}: transfer or delete ${owned.length === 1 ? 'it' : 'them'} first`);
+      throw new HttpError(
+        409,
+        'owns_builds',
+        `You still own ${owned.length} build${owned.length === 1 ? '' : 's'}: transfer or delete ${owned.length === 1 ? 'it' : 'them'} first`,
+      );
     }
     for (const section of [...accountDataSections].reverse()) await section.erase(trx, userId);
   });

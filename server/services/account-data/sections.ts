@@ -9,7 +9,11 @@ export const accountSection: AccountDataSection = {
       .select(['id', 'handle', 'display_name', 'email', 'notice_email', 'avatar_url', 'is_admin', 'created_at', 'updated_at'])
       .where('id', '=', userId)
       .executeTakeFirstOrThrow();
-    const identities = await db.selectFrom('identities').select(['provider', 'provider_uid', 'created_at', 'last_used_at']).where('user_id', '=', userId).execute();
+    const identities = await db
+      .selectFrom('identities')
+      .select(['provider', 'provider_uid', 'created_at', 'last_used_at'])
+      .where('user_id', '=', userId)
+      .execute();
     return { ...user, signInMethods: identities };
   },
   async erase(trx, userId) {
@@ -18,7 +22,16 @@ export const accountSection: AccountDataSection = {
     // The row stays so what the person wrote keeps an author: shown as "former member".
     await trx
       .updateTable('users')
-      .set({ handle: `former-member-${userId}`, display_name: 'Former member', email: null, notice_email: null, avatar_url: null, is_admin: false, deleted_at: sql<Date>`now()`, updated_at: sql<Date>`now()` })
+      .set({
+        handle: `former-member-${userId}`,
+        display_name: 'Former member',
+        email: null,
+        notice_email: null,
+        avatar_url: null,
+        is_admin: false,
+        deleted_at: sql<Date>`now()`,
+        updated_at: sql<Date>`now()`,
+      })
       .where('id', '=', userId)
       .execute();
   },
@@ -39,7 +52,11 @@ export const membershipsSection: AccountDataSection = {
       .select(['s.id as sponsorId', 's.name as sponsorName', 'm.created_at as since'])
       .where('m.user_id', '=', userId)
       .execute();
-    const invitationsSent = await db.selectFrom('invitations').select(['id', 'kind', 'build_id', 'email', 'created_at', 'accepted_at', 'revoked_at']).where('invited_by', '=', userId).execute();
+    const invitationsSent = await db
+      .selectFrom('invitations')
+      .select(['id', 'kind', 'build_id', 'email', 'created_at', 'accepted_at', 'revoked_at'])
+      .where('invited_by', '=', userId)
+      .execute();
     return { builds, sponsors, invitationsSent };
   },
   async erase(trx, userId) {
