@@ -1,23 +1,26 @@
 import { isRouteErrorResponse, useRouteError } from 'react-router';
 import { Button, ButtonLink } from '../components/ui/button';
 import { StateMessage } from '../components/ui/state-message';
+import { Forbidden } from '../routes/forbidden';
 import { NotFound } from '../routes/not-found';
+import { SignInRequired } from '../routes/sign-in-required';
 import { paths } from '../shared/paths';
 import { SiteFooter, SiteHeader, SkipLink } from './shell';
 
 /**
  * Root ErrorBoundary. It replaces the Shell, so it brings its own header and footer; details of the
- * error stay out of the page (no messages, no stacks) because they can leak internals.
+ * error stay out of the page (no messages, no stacks) because they can leak internals. Loaders throw
+ * `data(null, { status })` for 401, 403 and 404, and each gets a page that says what to do next.
  */
 export function RouteErrorBoundary() {
   const error = useRouteError();
-  const notFound = isRouteErrorResponse(error) && error.status === 404;
+  const status = isRouteErrorResponse(error) ? error.status : null;
   return (
     <div className="flex min-h-screen flex-col">
       <SkipLink />
       <SiteHeader />
       <main id="main" tabIndex={-1} className="page-wrap w-full flex-1 pt-8 pb-4 focus:outline-none">
-        {notFound ? <NotFound /> : <SomethingWentWrong />}
+        {status === 401 ? <SignInRequired /> : status === 403 ? <Forbidden /> : status === 404 ? <NotFound /> : <SomethingWentWrong />}
       </main>
       <SiteFooter />
     </div>

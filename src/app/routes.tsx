@@ -2,10 +2,18 @@ import type { QueryClient } from '@tanstack/react-query';
 import type { RouteObject } from 'react-router';
 import { latestEpisodesOptions } from '../features/episodes/api/get-latest-episodes';
 import type { ApiClient } from '../lib/api-client';
+import { AccountBuildsPage } from '../routes/account-builds';
+import { AccountSettingsPage } from '../routes/account-settings';
+import { adminAccountsLoader, AdminAccountsPage } from '../routes/admin-accounts';
+import { buildTeamLoader, BuildTeamPage } from '../routes/build-team';
 import { FrontPage, frontPageQuery } from '../routes/front-page';
+import { InvitationAcceptPage } from '../routes/invitation-accept';
 import { NotFound } from '../routes/not-found';
+import { primeSession, requireAccount } from '../routes/route-guards';
+import { SignInPage } from '../routes/sign-in';
+import { SignInLinkPage } from '../routes/sign-in-link';
 import { RouteErrorBoundary } from './error-boundary';
-import { Shell } from './shell';
+import { Shell, ShellLoading } from './shell';
 
 /** The catch-all route; the server answers 404 when it matches. */
 export const NOT_FOUND_ROUTE_ID = 'not-found';
@@ -20,11 +28,23 @@ export interface RouteDeps {
  * Loaders only prime the query cache; components read it with the same query options.
  */
 export function createRoutes({ queryClient, api }: RouteDeps): RouteObject[] {
+  const deps = { queryClient, api };
+  const signedIn = async ({ request }: { request: Request }) => {
+    await requireAccount(deps, request);
+    return null;
+  };
   return [
     {
       id: 'root',
       path: '/',
+      // The header knows who is signed in already in the server's HTML.
+      loader: async () => {
+        await primeSession(deps);
+        return null;
+      },
       Component: Shell,
+      // Only when the browser renders without server HTML (npm run dev): the header waits for the session.
+      HydrateFallback: ShellLoading,
       ErrorBoundary: RouteErrorBoundary,
       children: [
         {
@@ -37,6 +57,13 @@ export function createRoutes({ queryClient, api }: RouteDeps): RouteObject[] {
           },
           Component: FrontPage,
         },
+        { path: 'sign-in', id: 'sign-in', Component: SignInPage },
+        { path: 'sign-in/link', id: 'sign-in-link', Component: SignInLinkPage },
+        { path: 'invitations/accept', id: 'invitation-accept', Component: InvitationAcceptPage },
+        { path: 'account', id: 'account-settings', loader: signedIn, Component: AccountSettingsPage },
+        { path: 'account/builds', id: 'account-builds', loader: signedIn, Component: AccountBuildsPage },
+        { path: 'account/builds/:buildId/team', id: 'build-team', loader: buildTeamLoader(deps), Component: BuildTeamPage },
+        { path: 'admin/accounts', id: 'admin-accounts', loader: adminAccountsLoader(deps), Component: AdminAccountsPage },
         { path: '*', id: NOT_FOUND_ROUTE_ID, Component: NotFound },
       ],
     },

@@ -1,5 +1,13 @@
-import { Link, NavLink, Outlet } from 'react-router';
+import { useEffect, useState } from 'react';
+import { Link, NavLink, Outlet, useLocation } from 'react-router';
+import { useSession } from '../features/accounts/api/get-session';
+import { AccountMenu, type AccountMenuItem } from '../features/accounts/components/account-menu';
+import { accountPaths } from '../features/accounts/paths';
+import { adminPaths } from '../features/admin/paths';
+import { Notice } from '../components/ui/notice';
+import { StateMessage } from '../components/ui/state-message';
 import { paths } from '../shared/paths';
+import type { Account } from '../shared/schemas/accounts';
 
 export interface NavItem {
   label: string;
@@ -29,6 +37,53 @@ function navClass({ isActive }: { isActive: boolean }): string {
   return `inline-block border-b-2 py-1 font-condensed text-[15px] font-medium tracking-[0.08em] uppercase no-underline ${state}`;
 }
 
+/**
+ * The account menu's entries: only what this person may use (the server enforces every guard
+ * again). Later screens add theirs here: Workbench, Inbox, Sponsor summary, Moderation queue.
+ */
+export function accountMenuItems(account: Account): AccountMenuItem[] {
+  const items: AccountMenuItem[] = [{ label: 'Account settings', to: accountPaths.settings() }];
+  if (account.builds.some((b) => b.role === 'owner')) items.push({ label: 'Build teams', to: accountPaths.builds() });
+  if (account.isAdmin) items.push({ label: 'Accounts', to: adminPaths.accounts() });
+  return items;
+}
+
+/** "Sign in" for visitors, the account menu for the signed-in; a same-size blank while unknown. */
+function AccountArea() {
+  const { data, isError } = useSession();
+  const { pathname, search } = useLocation();
+  if (data?.account) return <AccountMenu account={data.account} items={accountMenuItems(data.account)} />;
+  if (!data && !isError) return <span aria-hidden="true" className="inline-block h-11 w-11" />;
+  // On the sign-in pages, keep the return path they already carry instead of pointing back at them.
+  const here = `${pathname}${search}`;
+  const returnTo = pathname.startsWith('/sign-in') ? (new URLSearchParams(search).get('returnTo') ?? '/') : here;
+  return (
+    <Link
+      to={accountPaths.signIn(returnTo)}
+      className="inline-flex min-h-11 items-center border-[1.5px] border-rule px-3 font-condensed text-[15px] font-semibold tracking-[0.08em] text-paper uppercase no-underline hover:border-paper"
+    >
+      Sign in
+    </Link>
+  );
+}
+
+/** A one-off message carried in navigation state ("You joined the build team"); read in an effect so hydration stays exact. */
+function FlashNotice() {
+  const location = useLocation();
+  const [notice, setNotice] = useState<string | null>(null);
+  useEffect(() => {
+    const state: unknown = location.state;
+    const text = state && typeof state === 'object' && 'notice' in state && typeof state.notice === 'string' ? state.notice : null;
+    setNotice(text);
+  }, [location.key, location.state]);
+  if (!notice) return null;
+  return (
+    <Notice kind="success" className="mb-6 max-w-measure">
+      {notice}
+    </Notice>
+  );
+}
+
 /** Off-screen until focused, so keyboard readers can jump past the header. */
 export function SkipLink() {
   return (
@@ -41,7 +96,7 @@ export function SkipLink() {
 export function SiteHeader() {
   return (
     <header className="on-ink bg-ink text-paper">
-      <div className="page-wrap flex flex-wrap items-center gap-x-7 gap-y-1 py-3">
+      <div className="page-wrap flex flex-wrap items-center gap-x-7 gap-y-1 py-2">
         <Link
           to={paths.home()}
           className="flex items-center gap-2.5 py-1 font-serif text-xl leading-none font-bold text-paper no-underline"
@@ -60,6 +115,9 @@ export function SiteHeader() {
             ))}
           </ul>
         </nav>
+        <div className="ml-auto">
+          <AccountArea />
+        </div>
       </div>
     </header>
   );
@@ -87,9 +145,19 @@ export function Shell() {
       <SiteHeader />
       {/* tabIndex -1 lets the skip link move focus here, not only scroll. */}
       <main id="main" tabIndex={-1} className="page-wrap w-full flex-1 pt-8 pb-4 focus:outline-none">
+        <FlashNotice />
         <Outlet />
       </main>
       <SiteFooter />
+    </div>
+  );
+}
+
+/** What the browser shows before the first loaders finish when there was no server render. */
+export function ShellLoading() {
+  return (
+    <div className="page-wrap pt-8">
+      <StateMessage kind="loading" title="Loading…" />
     </div>
   );
 }

@@ -1,4 +1,6 @@
-import type { z } from 'zod';
+import { z } from 'zod';
+import { CSRF_HEADER } from '../shared/http';
+import { csrfResponse } from '../shared/schemas/accounts';
 import { apiErrorBody } from '../shared/schemas/common';
 
 /** An API answer that was not 2xx, carrying the server's error code and field messages. */
@@ -8,6 +10,8 @@ export class ApiError extends Error {
     readonly code: string,
     message: string,
     readonly fields?: Record<string, string[]>,
+    /** Seconds from the Retry-After header of a 429, when the server sent one. */
+    readonly retryAfter?: number,
   ) {
     super(message);
     this.name = 'ApiError';
@@ -27,26 +31,37 @@ type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 export interface ApiClient {
   request<S extends z.ZodType>(method: Method, path: string, schema: S, body?: unknown, signal?: AbortSignal): Promise<z.infer<S>>;
   get<S extends z.ZodType>(path: string, schema: S, signal?: AbortSignal): Promise<z.infer<S>>;
+  post<S extends z.ZodType>(path: string, body: unknown, schema: S, signal?: AbortSignal): Promise<z.infer<S>>;
+  put<S extends z.ZodType>(path: string, body: unknown, schema: S, signal?: AbortSignal): Promise<z.infer<S>>;
+  patch<S extends z.ZodType>(path: string, body: unknown, schema: S, signal?: AbortSignal): Promise<z.infer<S>>;
+  del<S extends z.ZodType>(path: string, schema: S, signal?: AbortSignal): Promise<z.infer<S>>;
+  /** Drops the cached CSRF token; call it whenever the session changes (sign-in, sign-out, deletion). */
+  forgetCsrfToken(): void;
 }
 
-const CSRF_COOKIE = 'rr_csrf';
-export const CSRF_HEADER = 'x-csrf-token';
+/** For 204 answers: whatever arrives (normally nothing) is read as `undefined`. */
+export const noContent = z.unknown().transform((): undefined => undefined);
 
-function csrfFromCookie(): string | undefined {
-  if (typeof document === 'undefined') return undefined;
-  const hit = document.cookie.split('; ').find((c) => c.startsWith(`${CSRF_COOKIE}=`));
-  return hit ? decodeURIComponent(hit.slice(CSRF_COOKIE.length + 1)) : undefined;
+export { CSRF_HEADER };
+export const CSRF_TOKEN_PATH = '/api/csrf-token';
+/** The error code the server answers a missing or stale CSRF token with (403). */
+export const CSRF_INVALID = 'csrf_invalid';
+
+interface Exchange {
+  res: Response;
+  json: unknown;
 }
 
 /** The one fetch wrapper: JSON in and out, CSRF header on writes, errors as ApiError. */
 export function createApiClient(options: ApiClientOptions = {}): ApiClient {
   const doFetch = options.fetch ?? globalThis.fetch.bind(globalThis);
   const baseUrl = options.baseUrl ?? '';
+  // One token per client instance, fetched on the first write; concurrent writes share the fetch.
+  let csrfToken: Promise<string> | undefined;
 
-  async function request<S extends z.ZodType>(method: Method, path: string, schema: S, body?: unknown, signal?: AbortSignal) {
+  async function exchange(method: Method, path: string, body: unknown, signal: AbortSignal | undefined, csrf?: string): Promise<Exchange> {
     const headers: Record<string, string> = { accept: 'application/json', ...options.headers };
     if (body !== undefined) headers['content-type'] = 'application/json';
-    const csrf = method === 'GET' ? undefined : csrfFromCookie();
     if (csrf) headers[CSRF_HEADER] = csrf;
     const res = await doFetch(`${baseUrl}${path}`, {
       method,
@@ -56,22 +71,71 @@ export function createApiClient(options: ApiClientOptions = {}): ApiClient {
       signal,
     });
     const text = await res.text();
-    const json: unknown = text ? safeJson(text) : undefined;
-    if (!res.ok) {
-      const parsed = apiErrorBody.safeParse(json);
-      if (parsed.success) {
-        const { code, message, fields } = parsed.data.error;
-        throw new ApiError(res.status, code, message, fields);
-      }
-      throw new ApiError(res.status, 'http_error', `Request failed with status ${res.status}`);
+    return { res, json: text ? safeJson(text) : undefined };
+  }
+
+  function getCsrfToken(): Promise<string> {
+    if (!csrfToken) {
+      const pending = exchange('GET', CSRF_TOKEN_PATH, undefined, undefined).then((ex) => read(ex, csrfResponse).token);
+      csrfToken = pending;
+      // A failed fetch must not stick: the next write tries again.
+      pending.catch(() => {
+        if (csrfToken === pending) csrfToken = undefined;
+      });
     }
-    return schema.parse(json) as z.infer<S>;
+    return csrfToken;
+  }
+
+  async function request<S extends z.ZodType>(method: Method, path: string, schema: S, body?: unknown, signal?: AbortSignal) {
+    if (method === 'GET') return read(await exchange(method, path, body, signal), schema);
+    let ex = await exchange(method, path, body, signal, await getCsrfToken());
+    if (isCsrfInvalid(ex)) {
+      // The session (and with it the token) may have changed since we fetched it: refetch once.
+      csrfToken = undefined;
+      ex = await exchange(method, path, body, signal, await getCsrfToken());
+    }
+    return read(ex, schema);
   }
 
   return {
     request,
     get: (path, schema, signal) => request('GET', path, schema, undefined, signal),
+    post: (path, body, schema, signal) => request('POST', path, schema, body, signal),
+    put: (path, body, schema, signal) => request('PUT', path, schema, body, signal),
+    patch: (path, body, schema, signal) => request('PATCH', path, schema, body, signal),
+    del: (path, schema, signal) => request('DELETE', path, schema, undefined, signal),
+    forgetCsrfToken: () => {
+      csrfToken = undefined;
+    },
   };
+}
+
+function isCsrfInvalid({ res, json }: Exchange): boolean {
+  if (res.status !== 403) return false;
+  const parsed = apiErrorBody.safeParse(json);
+  return parsed.success && parsed.data.error.code === CSRF_INVALID;
+}
+
+function read<S extends z.ZodType>({ res, json }: Exchange, schema: S): z.infer<S> {
+  if (!res.ok) throw toApiError(res, json);
+  return schema.parse(json) as z.infer<S>;
+}
+
+function toApiError(res: Response, json: unknown): ApiError {
+  const retryAfter = parseRetryAfter(res.headers.get('retry-after'));
+  const parsed = apiErrorBody.safeParse(json);
+  if (parsed.success) {
+    const { code, message, fields } = parsed.data.error;
+    return new ApiError(res.status, code, message, fields, retryAfter);
+  }
+  return new ApiError(res.status, 'http_error', `Request failed with status ${res.status}`, undefined, retryAfter);
+}
+
+/** Retry-After is either seconds or an HTTP date; only the seconds form is worth a countdown. */
+function parseRetryAfter(value: string | null): number | undefined {
+  if (!value) return undefined;
+  const seconds = Number(value);
+  return Number.isInteger(seconds) && seconds >= 0 ? seconds : undefined;
 }
 
 function safeJson(text: string): unknown {
