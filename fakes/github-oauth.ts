@@ -165,6 +165,10 @@ export async function startGithubOAuthFake(opts: GithubOAuthFakeOptions = {}): P
     if (!scopes.includes('user') && !scopes.includes('user:email')) return void res.status(404).json({ message: 'Not Found' });
     res.json([{ email: grant.account.email, primary: true, verified: true, visibility: 'private' }]);
   });
+  // Browsers ask every origin for a favicon; answer without a 404 in the console.
+  app.get('/favicon.ico', (_req, res) => {
+    res.status(204).end();
+  });
   app.get('/avatars/:file', (req, res) => {
     const login = req.params.file.replace(/\.svg$/, '');
     const name = findAccount(login)?.name ?? login;

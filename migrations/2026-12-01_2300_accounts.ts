@@ -80,7 +80,10 @@ export async function up(db: Kysely<any>): Promise<void> {
     .addColumn('accepted_by', 'bigint', (c) => c.references('users.id').onDelete('set null'))
     .addColumn('revoked_at', 'timestamptz')
     .addColumn('created_at', 'timestamptz', (c) => c.notNull().defaultTo(sql`now()`))
-    .addCheckConstraint('invitations_kind_check', sql`(kind = 'build-editor' and build_id is not null) or (kind = 'sponsor-member' and sponsor_id is not null)`)
+    .addCheckConstraint(
+      'invitations_kind_check',
+      sql`(kind = 'build-editor' and build_id is not null) or (kind = 'sponsor-member' and sponsor_id is not null)`,
+    )
     .execute();
   await db.schema.createIndex('invitations_build_id_idx').on('invitations').column('build_id').execute();
   await db.schema.createIndex('invitations_sponsor_id_idx').on('invitations').column('sponsor_id').execute();
@@ -110,7 +113,16 @@ export async function up(db: Kysely<any>): Promise<void> {
 }
 
 export async function down(db: Kysely<any>): Promise<void> {
-  for (const t of ['rate_limits', 'audit_events', 'invitations', 'sign_in_tokens', 'sponsor_members', 'build_members', 'sessions', 'identities']) {
+  for (const t of [
+    'rate_limits',
+    'audit_events',
+    'invitations',
+    'sign_in_tokens',
+    'sponsor_members',
+    'build_members',
+    'sessions',
+    'identities',
+  ]) {
     await db.schema.dropTable(t).execute();
   }
   await db.schema.alterTable('users').dropColumn('notice_email').dropColumn('suspended_at').dropColumn('deleted_at').execute();

@@ -23,6 +23,11 @@ function avatarOrigin(config: AppDeps['config']): string {
   return config.GITHUB_USER_PROFILE_URL ? new URL(config.GITHUB_USER_PROFILE_URL).origin : 'https://avatars.githubusercontent.com';
 }
 
+/** Hides the value of any `token=` (plain or percent-encoded) in a logged URL. */
+export function redactTokens(url: string | undefined): string | undefined {
+  return url?.replace(/(token(?:=|%3D))[^&#\s]*/gi, '$1[redacted]');
+}
+
 /** Builds the Express app from its dependencies; listening is the caller's business. */
 export function createApp(deps: AppDeps): Express {
   const { config } = deps;
@@ -52,7 +57,14 @@ export function createApp(deps: AppDeps): Express {
       strictTransportSecurity: config.PUBLIC_URL.startsWith('https:'),
     }),
   );
-  app.use(pinoHttp({ logger: deps.logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(
+    pinoHttp({
+      logger: deps.logger,
+      autoLogging: { ignore: (req) => req.url === '/api/health' },
+      // Link tokens can ride in a return path (`?returnTo=/invitations/accept%23token%3D…`).
+      serializers: { req: (req: { url?: string }) => ({ ...req, url: redactTokens(req.url), query: undefined }) },
+    }),
+  );
 
   app.set('trust proxy', trustProxy(config.TRUST_PROXY));
   const sessions = sessionMiddleware(deps.pool, config);

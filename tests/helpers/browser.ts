@@ -71,7 +71,11 @@ export async function checkPhoneWidth(page: Page): Promise<void> {
 function screenshotPath(page: Page, suffix: string): string {
   mkdirSync(SCREENSHOT_DIR, { recursive: true });
   const url = new URL(page.url());
-  const name = `${url.pathname}${url.search}`.replace(/[^a-z0-9]+/gi, '_').replace(/^_+|_+$/g, '') || 'home';
+  const name =
+    `${url.pathname}${url.search}`
+      .replace(/[^a-z0-9]+/gi, '_')
+      .replace(/^_+|_+$/g, '')
+      .slice(0, 60) || 'home';
   return path.join(SCREENSHOT_DIR, `${name}-${suffix}.png`);
 }
 

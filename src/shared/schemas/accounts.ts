@@ -2,7 +2,10 @@ import { z } from 'zod';
 import { pagedList, pageQuery } from './common';
 
 export const handle = z.string().regex(/^[a-z0-9][a-z0-9-]{1,38}$/, 'lower-case letters, digits and dashes, 2–39 characters');
-export const emailAddress = z.email('must be an e-mail address').max(254).transform((e) => e.toLowerCase());
+export const emailAddress = z
+  .email('must be an e-mail address')
+  .max(254)
+  .transform((e) => e.toLowerCase());
 export const idParam = z.coerce.number().int().positive();
 
 /** A same-site path to return to after signing in; anything else falls back to the front page. */
@@ -11,7 +14,12 @@ export const returnTo = z
   .max(500)
   .refine((p) => p.startsWith('/') && !p.startsWith('//') && !p.startsWith('/\\'), 'must be a path on this site');
 
-export const buildMembership = z.object({ buildId: z.number().int(), buildTitle: z.string(), buildSlug: z.string(), role: z.enum(['owner', 'editor']) });
+export const buildMembership = z.object({
+  buildId: z.number().int(),
+  buildTitle: z.string(),
+  buildSlug: z.string(),
+  role: z.enum(['owner', 'editor']),
+});
 export const sponsorMembership = z.object({ sponsorId: z.number().int(), sponsorName: z.string(), sponsorSlug: z.string() });
 
 export const account = z.object({
@@ -67,7 +75,13 @@ export const invitationLookup = z.object({
 export type InvitationLookup = z.infer<typeof invitationLookup>;
 export const invitationAcceptResponse = z.object({ kind: z.enum(['build-editor', 'sponsor-member']), targetId: z.number().int() });
 
-export const buildMember = z.object({ userId: z.number().int(), handle: z.string(), displayName: z.string(), avatarUrl: z.string().nullable(), role: z.enum(['owner', 'editor']) });
+export const buildMember = z.object({
+  userId: z.number().int(),
+  handle: z.string(),
+  displayName: z.string(),
+  avatarUrl: z.string().nullable(),
+  role: z.enum(['owner', 'editor']),
+});
 export const buildMemberList = z.object({ items: z.array(buildMember) });
 
 export const adminAccountsQuery = pageQuery.extend({ q: z.string().trim().max(100).optional() });

@@ -9,29 +9,35 @@ export function initials(name: string): string {
   return letters.join('').toUpperCase() || '?';
 }
 
+// Fixed sizes as classes: the CSP allows no inline style attributes.
+const SIZES = {
+  28: 'h-7 w-7 text-[11px]',
+  36: 'h-9 w-9 text-sm',
+  56: 'h-14 w-14 text-[22px]',
+} as const;
+
 interface AvatarProps {
   name: string;
   url: string | null;
   /** 28 px in the header, larger on account pages. */
-  size?: number;
+  size?: keyof typeof SIZES;
   /** Empty when the name is printed beside the picture (it would be read twice). */
   alt?: string;
 }
 
 /** A person's picture in a round frame, or their initials on brass when they have none. */
 export function Avatar({ name, url, size = 28, alt = '' }: AvatarProps) {
-  const style = { width: size, height: size };
+  const sized = SIZES[size];
   if (url) {
-    return <img src={url} alt={alt} width={size} height={size} style={style} className="shrink-0 rounded-[50%] bg-paper-2 object-cover" />;
+    return <img src={url} alt={alt} width={size} height={size} className={`${sized} shrink-0 rounded-[50%] bg-paper-2 object-cover`} />;
   }
   return (
     <span
       role={alt ? 'img' : undefined}
       aria-label={alt || undefined}
       aria-hidden={alt ? undefined : true}
-      style={{ ...style, fontSize: Math.round(size * 0.4) }}
       // Ink on brass clears 4.5:1; brass is the fill here, never the text.
-      className="inline-flex shrink-0 items-center justify-center rounded-[50%] bg-brass font-condensed leading-none font-semibold text-ink"
+      className={`${sized} inline-flex shrink-0 items-center justify-center rounded-[50%] bg-brass font-condensed leading-none font-semibold text-ink`}
     >
       {initials(name)}
     </span>
