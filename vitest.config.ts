@@ -17,7 +17,8 @@ export default mergeConfig(
           test: {
             name: 'api',
             include: ['tests/api/**/*.test.ts'],
-            globalSetup: ['tests/setup/db-global.ts'],
+            // Some API suites also request pages, which the server renders from dist-test/.
+            globalSetup: ['tests/setup/db-global.ts', 'tests/setup/build-global.ts'],
             testTimeout: 20_000,
             hookTimeout: 60_000,
             // Two cores: one worker per core, one database per test file.
