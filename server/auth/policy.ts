@@ -1,11 +1,14 @@
-import type { BuildVisibility } from '../db/database';
+import type { BuildVisibility, EpisodeStatus } from '../db/database';
 import { HttpError } from '../http/http-error';
 import type { Actor, SignedIn } from './actor';
 
 export type { Actor } from './actor';
 
 /** What an action is about, loaded by the route before the policy decides. */
-export type Resource = { kind: 'build'; id: number; visibility: BuildVisibility } | { kind: 'account'; userId: number };
+export type Resource =
+  | { kind: 'build'; id: number; visibility: BuildVisibility; deleted: boolean; pendingTransferTo: number | null }
+  | { kind: 'episode'; id: number; buildId: number; visibility: BuildVisibility; status: EpisodeStatus; deleted: boolean }
+  | { kind: 'account'; userId: number };
 
 type Rule = {
   /** Visitors get 401 (sign in) rather than 403 when denied. */
@@ -14,8 +17,17 @@ type Rule = {
 };
 
 const role = (actor: Actor, buildId: number) => actor?.builds.get(buildId);
-const isTeam = (actor: Actor, r: Resource | undefined) => r?.kind === 'build' && role(actor, r.id) !== undefined;
-const isOwner = (actor: Actor, r: Resource | undefined) => r?.kind === 'build' && role(actor, r.id) === 'owner';
+/** The build a build or episode resource belongs to. */
+const buildOf = (r: Resource | undefined): number | undefined =>
+  r?.kind === 'build' ? r.id : r?.kind === 'episode' ? r.buildId : undefined;
+const isTeam = (actor: Actor, r: Resource | undefined) => {
+  const b = buildOf(r);
+  return b !== undefined && role(actor, b) !== undefined;
+};
+const isOwner = (actor: Actor, r: Resource | undefined) => {
+  const b = buildOf(r);
+  return b !== undefined && role(actor, b) === 'owner';
+};
 
 /**
  * The one table of who may do what (DESIGN.md, "People and roles"). Routes name an action in
@@ -24,6 +36,13 @@ const isOwner = (actor: Actor, r: Resource | undefined) => r?.kind === 'build' &
 const rules = {
   'site.read': { signedIn: false, allow: () => true },
   'account.self': { signedIn: true, allow: (a) => a !== null },
+  'build.create': { signedIn: true, allow: (a) => a !== null },
+  'build.read': { signedIn: false, allow: () => true },
+  'build.manage': { signedIn: true, allow: isOwner },
+  'build.transfer.accept': { signedIn: true, allow: (a, r) => r?.kind === 'build' && a !== null && r.pendingTransferTo === a.userId },
+  'episode.read': { signedIn: false, allow: () => true },
+  'episode.write': { signedIn: true, allow: isTeam },
+  'episode.delete': { signedIn: true, allow: isOwner },
   'build.team.read': { signedIn: true, allow: isTeam },
   'build.team.manage': { signedIn: true, allow: isOwner },
   'admin.accounts': { signedIn: true, allow: (a) => a?.isAdmin === true },
@@ -32,11 +51,19 @@ const rules = {
 export type PolicyAction = keyof typeof rules;
 export const policyActions = Object.keys(rules) as PolicyAction[];
 
+/** Actions open to visitors (what they are about may still be hidden from them). */
+export function isPublicAction(action: PolicyAction): boolean {
+  return !(rules[action] as Rule).signedIn;
+}
+
 /** May the actor see this resource exists at all? Hidden ones answer 404, never 401/403. */
 export function canSee(actor: Actor, resource: Resource | undefined): boolean {
-  if (!resource) return true;
-  if (resource.kind === 'build') return resource.visibility !== 'private' || role(actor, resource.id) !== undefined;
-  return true;
+  if (!resource || resource.kind === 'account') return true;
+  // Deleted things stay visible to their owner only, for the 30 days they can be restored.
+  if (resource.deleted) return isOwner(actor, resource);
+  if (isTeam(actor, resource)) return true;
+  if (resource.kind === 'episode' && resource.status !== 'published') return false;
+  return resource.visibility !== 'private';
 }
 
 /** True when the actor may perform the action on the resource. */

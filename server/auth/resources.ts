@@ -3,8 +3,14 @@ import type { Resource } from './policy';
 
 /** The build named by `:buildId`, as the policy sees it. */
 export async function buildResource(deps: AppDeps, params: { buildId: number }): Promise<Resource | null> {
-  const b = await deps.db.selectFrom('builds').select(['id', 'visibility']).where('id', '=', params.buildId).executeTakeFirst();
-  return b ? { kind: 'build', id: b.id, visibility: b.visibility } : null;
+  const b = await deps.db
+    .selectFrom('builds')
+    .select(['id', 'visibility', 'deleted_at', 'pending_transfer_to'])
+    .where('id', '=', params.buildId)
+    .executeTakeFirst();
+  return b
+    ? { kind: 'build', id: b.id, visibility: b.visibility, deleted: b.deleted_at !== null, pendingTransferTo: b.pending_transfer_to }
+    : null;
 }
 
 /** The build an invitation (`:invitationId`) belongs to. */
@@ -12,8 +18,36 @@ export async function invitationBuildResource(deps: AppDeps, params: { invitatio
   const b = await deps.db
     .selectFrom('invitations as i')
     .innerJoin('builds as b', 'b.id', 'i.build_id')
-    .select(['b.id', 'b.visibility'])
+    .select(['b.id', 'b.visibility', 'b.deleted_at', 'b.pending_transfer_to'])
     .where('i.id', '=', params.invitationId)
     .executeTakeFirst();
-  return b ? { kind: 'build', id: b.id, visibility: b.visibility } : null;
+  return b
+    ? { kind: 'build', id: b.id, visibility: b.visibility, deleted: b.deleted_at !== null, pendingTransferTo: b.pending_transfer_to }
+    : null;
+}
+
+/** The episode named by `:episodeId` with what the policy needs of its build. */
+export async function episodeResource(deps: AppDeps, params: { episodeId: number }): Promise<Resource | null> {
+  const e = await deps.db
+    .selectFrom('episodes as e')
+    .innerJoin('builds as b', 'b.id', 'e.build_id')
+    .select(['e.id', 'e.build_id', 'e.status', 'e.deleted_at', 'b.visibility', 'b.deleted_at as build_deleted_at'])
+    .where('e.id', '=', params.episodeId)
+    .executeTakeFirst();
+  return e
+    ? {
+        kind: 'episode',
+        id: e.id,
+        buildId: e.build_id,
+        visibility: e.visibility,
+        status: e.status,
+        deleted: e.deleted_at !== null || e.build_deleted_at !== null,
+      }
+    : null;
+}
+
+/** The episode an open item (`:openItemId`) was opened in. */
+export async function openItemResource(deps: AppDeps, params: { openItemId: number }): Promise<Resource | null> {
+  const o = await deps.db.selectFrom('open_items').select('opened_in_episode_id').where('id', '=', params.openItemId).executeTakeFirst();
+  return o ? episodeResource(deps, { episodeId: o.opened_in_episode_id }) : null;
 }

@@ -102,6 +102,64 @@ export interface BuildsTable {
   slug: string;
   title: string;
   visibility: Generated<BuildVisibility>;
+  vehicle_kind: Generated<VehicleKind>;
+  vehicle_make: string | null;
+  vehicle_model: string | null;
+  vehicle_year: string | null;
+  summary: string | null;
+  currency: Generated<string>;
+  budget_minor: number | null;
+  video_link_pattern: Generated<string>;
+  pending_transfer_to: number | null;
+  deleted_at: NullableTimestamp;
+  created_at: Generated<Date>;
+  updated_at: Generated<Date>;
+}
+
+export type VehicleKind = 'car' | 'motorcycle' | 'tractor' | 'boat' | 'other';
+
+export interface BuildSystemsTable {
+  id: Generated<number>;
+  build_id: number;
+  key: string;
+  name: string;
+  safety_critical: Generated<boolean>;
+  position: number;
+}
+
+export interface BuildSlugsTable {
+  id: Generated<number>;
+  build_id: number;
+  owner_id: number;
+  slug: string;
+  created_at: Generated<Date>;
+}
+
+export interface EpisodeSlugsTable {
+  id: Generated<number>;
+  episode_id: number;
+  build_id: number;
+  slug: string;
+  created_at: Generated<Date>;
+}
+
+export interface ChaptersTable {
+  id: Generated<number>;
+  episode_id: number;
+  position: number;
+  start_seconds: number;
+  title: string;
+  system_key: string | null;
+  notes: string | null;
+}
+
+export interface OpenItemsTable {
+  id: Generated<number>;
+  build_id: number;
+  title: string;
+  note: string | null;
+  opened_in_episode_id: number;
+  closed_in_episode_id: number | null;
   created_at: Generated<Date>;
   updated_at: Generated<Date>;
 }
@@ -115,6 +173,16 @@ export interface EpisodesTable {
   summary: string | null;
   status: Generated<EpisodeStatus>;
   published_at: NullableTimestamp;
+  write_up: ColumnType<unknown, string | undefined, string>;
+  write_up_html: Generated<string>;
+  video_url: string | null;
+  duration_seconds: number | null;
+  minutes_worked: number | null;
+  raised_vehicle: Generated<boolean>;
+  publish_at: NullableTimestamp;
+  publish_error: string | null;
+  version: Generated<number>;
+  deleted_at: NullableTimestamp;
   created_at: Generated<Date>;
   updated_at: Generated<Date>;
 }
@@ -168,4 +236,9 @@ export interface Database {
   invitations: InvitationsTable;
   audit_events: AuditEventsTable;
   rate_limits: RateLimitsTable;
+  build_systems: BuildSystemsTable;
+  build_slugs: BuildSlugsTable;
+  episode_slugs: EpisodeSlugsTable;
+  chapters: ChaptersTable;
+  open_items: OpenItemsTable;
 }

@@ -1,8 +1,10 @@
 import type { AppDeps } from '../app-deps';
+import { registerEpisodeJobs } from './episodes';
 import { registerMaintenance } from './maintenance';
 
 /** Every feature registers its jobs here, once, before the queue starts. */
 export function registerJobs(deps: AppDeps): void {
   deps.outbox.register();
   registerMaintenance(deps);
+  registerEpisodeJobs(deps);
 }

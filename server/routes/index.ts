@@ -1,6 +1,10 @@
 import type { RouteSpec } from '../http/registry';
 import { accountRoutes } from './account';
 import { adminRoutes } from './admin';
+import { buildRoutes } from './builds';
+import { episodeEditorRoutes } from './episode-editor';
+import { openItemRoutes } from './open-items';
+import { workbenchRoutes } from './workbench';
 import { episodeRoutes } from './episodes';
 import { healthRoutes } from './health';
 import { invitationRoutes } from './invitations';
@@ -14,4 +18,8 @@ export const routeRegistry: readonly RouteSpec[] = [
   ...accountRoutes,
   ...invitationRoutes,
   ...adminRoutes,
+  ...buildRoutes,
+  ...episodeEditorRoutes,
+  ...openItemRoutes,
+  ...workbenchRoutes,
 ];

@@ -5,6 +5,7 @@
 // which is why each route gets a fresh world.
 import { sql } from 'kysely';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { isPublicAction } from '../../server/auth/policy';
 import { hashToken } from '../../server/services/tokens';
 import { routeRegistry } from '../../server/routes';
 import { createBuild, createUser } from '../helpers/factories';
@@ -16,7 +17,8 @@ type ActorName = (typeof ACTORS)[number];
 type Row = Record<ActorName, number>;
 
 interface World {
-  ids: { buildA: number; editor: number; follower: number; invitation: number };
+  ids: { buildA: number; editor: number; follower: number; invitation: number; draft: number; openItem: number };
+  slugs: { owner: string; buildA: string; draft: string };
   clients: Record<ActorName, TestClient>;
 }
 
@@ -42,9 +44,19 @@ const adminOnly = (s: number): Row => ({
   sponsorMember: 403,
   admin: s,
 });
+/** A draft episode exists only for its build team: everyone else gets 404, visitors included. */
+const draftTeam = (s: number, editor = s, owner = s): Row => ({
+  visitor: 404,
+  follower: 404,
+  editor,
+  owner,
+  otherOwner: 404,
+  sponsorMember: 404,
+  admin: 404,
+});
 
 /** Route → request to send (with the world's ids) → expected statuses. Later issues add rows. */
-const matrix: Record<string, { request: (w: World) => { path: string; body?: unknown }; expect: Row }> = {
+const matrix: Record<string, { request: (w: World) => { path: string; body?: unknown }; expect: Row; freshWorldPerActor?: boolean }> = {
   'GET /health': { request: () => ({ path: '/api/health' }), expect: all(200) },
   'GET /episodes': { request: () => ({ path: '/api/episodes' }), expect: all(200) },
   'GET /session': { request: () => ({ path: '/api/session' }), expect: all(200) },
@@ -77,6 +89,82 @@ const matrix: Record<string, { request: (w: World) => { path: string; body?: unk
   'POST /admin/accounts/:userId/actions': {
     request: (w) => ({ path: `/api/admin/accounts/${w.ids.follower}/actions`, body: { action: 'bogus' } }),
     expect: adminOnly(400),
+  },
+  // Builds: anyone signed in may start one; the owner manages it; a public build is readable by all.
+  'POST /builds': { request: () => ({ path: '/api/builds', body: { title: '' } }), expect: signedIn(400) },
+  'GET /builds/:buildId': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}` }), expect: all(200) },
+  'PATCH /builds/:buildId': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}`, body: {} }), expect: ownerOnly(400) },
+  'DELETE /builds/:buildId': {
+    request: (w) => ({ path: `/api/builds/${w.ids.buildA}` }),
+    expect: ownerOnly(204),
+    freshWorldPerActor: true,
+  },
+  'POST /builds/:buildId/restore': {
+    request: (w) => ({ path: `/api/builds/${w.ids.buildA}/restore`, body: { junk: 1 } }),
+    expect: ownerOnly(400),
+  },
+  'POST /builds/:buildId/transfer': {
+    request: (w) => ({ path: `/api/builds/${w.ids.buildA}/transfer`, body: {} }),
+    expect: ownerOnly(400),
+  },
+  'DELETE /builds/:buildId/transfer': {
+    request: (w) => ({ path: `/api/builds/${w.ids.buildA}/transfer` }),
+    expect: ownerOnly(204),
+    freshWorldPerActor: true,
+  },
+  // The world offers build A to its editor: only that editor may accept.
+  'POST /builds/:buildId/transfer/accept': {
+    request: (w) => ({ path: `/api/builds/${w.ids.buildA}/transfer/accept`, body: { junk: 1 } }),
+    expect: { visitor: 401, follower: 403, editor: 400, owner: 403, otherOwner: 403, sponsorMember: 403, admin: 403 },
+  },
+  'GET /builds/:buildId/episodes': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}/episodes` }), expect: all(200) },
+  'POST /builds/:buildId/episodes': {
+    request: (w) => ({ path: `/api/builds/${w.ids.buildA}/episodes`, body: { title: '' } }),
+    expect: teamOnly(400),
+  },
+  // Episodes: the build team writes; a draft is hidden from everyone else; only the owner deletes.
+  'GET /episodes/:episodeId': { request: (w) => ({ path: `/api/episodes/${w.ids.draft}` }), expect: draftTeam(200) },
+  'PATCH /episodes/:episodeId': { request: (w) => ({ path: `/api/episodes/${w.ids.draft}`, body: {} }), expect: draftTeam(400) },
+  'POST /episodes/:episodeId/publish': {
+    request: (w) => ({ path: `/api/episodes/${w.ids.draft}/publish`, body: {} }),
+    expect: draftTeam(400),
+  },
+  'POST /episodes/:episodeId/schedule': {
+    request: (w) => ({ path: `/api/episodes/${w.ids.draft}/schedule`, body: {} }),
+    expect: draftTeam(400),
+  },
+  'POST /episodes/:episodeId/unpublish': {
+    request: (w) => ({ path: `/api/episodes/${w.ids.draft}/unpublish`, body: {} }),
+    expect: draftTeam(400),
+  },
+  'DELETE /episodes/:episodeId': {
+    request: (w) => ({ path: `/api/episodes/${w.ids.draft}` }),
+    expect: draftTeam(204, 403, 204),
+    freshWorldPerActor: true,
+  },
+  'POST /episodes/:episodeId/restore': {
+    request: (w) => ({ path: `/api/episodes/${w.ids.draft}/restore`, body: { junk: 1 } }),
+    expect: draftTeam(400, 403, 400),
+  },
+  'GET /builds/:buildId/open-items': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}/open-items` }), expect: teamOnly(200) },
+  'POST /builds/:buildId/open-items': {
+    request: (w) => ({ path: `/api/builds/${w.ids.buildA}/open-items`, body: { title: '' } }),
+    expect: teamOnly(400),
+  },
+  'PATCH /open-items/:openItemId': { request: (w) => ({ path: `/api/open-items/${w.ids.openItem}`, body: {} }), expect: draftTeam(400) },
+  'DELETE /open-items/:openItemId': {
+    request: (w) => ({ path: `/api/open-items/${w.ids.openItem}` }),
+    expect: draftTeam(204),
+    freshWorldPerActor: true,
+  },
+  'GET /workbench': { request: () => ({ path: '/api/workbench' }), expect: signedIn(200) },
+  'GET /creators/:handle/builds/:buildSlug': {
+    request: (w) => ({ path: `/api/creators/${w.slugs.owner}/builds/${w.slugs.buildA}` }),
+    expect: all(200),
+  },
+  'GET /builds/:buildId/episodes-by-slug/:episodeSlug': {
+    request: (w) => ({ path: `/api/builds/${w.ids.buildA}/episodes-by-slug/${w.slugs.draft}` }),
+    expect: draftTeam(200),
   },
 };
 
@@ -125,12 +213,43 @@ async function makeWorld(visibility: 'public' | 'unlisted' | 'private' = 'public
     .returning('id')
     .executeTakeFirstOrThrow();
 
+  await db.updateTable('builds').set({ pending_transfer_to: users.editor.id }).where('id', '=', buildA.id).execute();
+  const draft = await db
+    .insertInto('episodes')
+    .values({
+      build_id: buildA.id,
+      number: 1,
+      slug: `draft-${buildA.id}`,
+      title: 'A draft',
+      status: 'draft',
+      write_up: JSON.stringify({ type: 'doc', content: [{ type: 'paragraph' }] }),
+    })
+    .returning(['id', 'slug'])
+    .executeTakeFirstOrThrow();
+  const item = await db
+    .insertInto('open_items')
+    .values({ build_id: buildA.id, title: 'Refill coolant', opened_in_episode_id: draft.id })
+    .returning('id')
+    .executeTakeFirstOrThrow();
+  const ownerRow = await db.selectFrom('users').select('handle').where('id', '=', users.owner.id).executeTakeFirstOrThrow();
+
   const clients = {} as Record<ActorName, TestClient>;
   for (const name of ACTORS) {
     clients[name] = new TestClient(app.baseUrl);
     if (name !== 'visitor') await signInByEmail(clients[name], db, users[name].email);
   }
-  return { ids: { buildA: buildA.id, editor: users.editor.id, follower: users.follower.id, invitation: invitation.id }, clients };
+  return {
+    ids: {
+      buildA: buildA.id,
+      editor: users.editor.id,
+      follower: users.follower.id,
+      invitation: invitation.id,
+      draft: draft.id,
+      openItem: item.id,
+    },
+    slugs: { owner: ownerRow.handle, buildA: buildA.slug, draft: draft.slug },
+    clients,
+  };
 }
 
 describe('authorisation matrix', () => {
@@ -139,7 +258,7 @@ describe('authorisation matrix', () => {
     expect(Object.keys(matrix).sort()).toEqual(registered);
   });
 
-  it('gives every route an allowed actor, and every guarded route a denied one', () => {
+  it('gives every route an allowed actor, and every route closed to visitors a denied one', () => {
     for (const r of routeRegistry) {
       const row = matrix[`${r.method.toUpperCase()} ${r.path}`]!.expect;
       const statuses = Object.values(row);
@@ -147,7 +266,7 @@ describe('authorisation matrix', () => {
         statuses.some((s) => s < 401 || s > 404),
         `${r.path} has no allowed actor`,
       ).toBe(true);
-      if (r.action !== 'site.read')
+      if (!isPublicAction(r.action))
         expect(
           statuses.some((s) => s >= 401 && s <= 404),
           `${r.path} has no denied actor`,
@@ -160,9 +279,10 @@ describe('authorisation matrix', () => {
     it(`${key}`, async () => {
       const entry = matrix[key];
       expect(entry, `matrix row for ${key}`).toBeDefined();
-      const world = await makeWorld();
+      let world = await makeWorld();
       const got: Partial<Row> = {};
       for (const actor of ACTORS) {
+        if (entry!.freshWorldPerActor && actor !== ACTORS[0]) world = await makeWorld();
         const { path, body } = entry!.request(world);
         const res = await world.clients[actor].request(route.method.toUpperCase(), path, body);
         got[actor] = res.status;

@@ -53,7 +53,21 @@ describe('demo seed', () => {
     users: await handle.db.selectFrom('users').select(['id', 'handle', 'display_name', 'is_admin']).orderBy('id').execute(),
     builds: await handle.db.selectFrom('builds').select(['id', 'slug', 'title', 'owner_id']).orderBy('id').execute(),
     members: await handle.db.selectFrom('build_members').select(['build_id', 'user_id', 'role']).orderBy('id').execute(),
-    episodes: await handle.db.selectFrom('episodes').select(['id', 'build_id', 'slug', 'title', 'published_at']).orderBy('id').execute(),
+    episodes: await handle.db
+      .selectFrom('episodes')
+      .select(['id', 'build_id', 'slug', 'title', 'status', 'published_at', 'publish_at'])
+      .orderBy('id')
+      .execute(),
+    chapters: await handle.db
+      .selectFrom('chapters')
+      .select(['id', 'episode_id', 'position', 'start_seconds', 'title'])
+      .orderBy('id')
+      .execute(),
+    openItems: await handle.db
+      .selectFrom('open_items')
+      .select(['id', 'title', 'opened_in_episode_id', 'closed_in_episode_id'])
+      .orderBy('id')
+      .execute(),
   });
 
   it('creates the demo data, and running it twice leaves the same rows', async () => {
@@ -67,6 +81,10 @@ describe('demo seed', () => {
     expect(first.users.filter((u) => u.is_admin).map((u) => u.handle)).toEqual(['site-admin']);
     expect(first.builds.length).toBeGreaterThan(0);
     expect(first.episodes.length).toBeGreaterThan(0);
+    // The demo: several published episodes per build, one scheduled, one draft, open items carried.
+    expect(new Set(first.episodes.map((e) => e.status))).toEqual(new Set(['published', 'scheduled', 'draft']));
+    expect(first.chapters.length).toBeGreaterThan(10);
+    expect(first.openItems.some((o) => o.closed_in_episode_id !== null && o.closed_in_episode_id !== o.opened_in_episode_id)).toBe(true);
 
     await runSeed(handle.db);
     expect(await snapshot()).toEqual(first);

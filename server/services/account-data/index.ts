@@ -1,10 +1,11 @@
 import type { Db } from '../../db/kysely';
 import { HttpError } from '../../http/http-error';
+import { buildsSection } from './builds-section';
 import type { AccountDataSection } from './section';
 import { accountSection, membershipsSection } from './sections';
 
 /** Every section of an account's data; later features append theirs. Erased in reverse order. */
-export const accountDataSections: readonly AccountDataSection[] = [accountSection, membershipsSection];
+export const accountDataSections: readonly AccountDataSection[] = [accountSection, membershipsSection, buildsSection];
 
 /** "Download my data": one JSON document with a part per section. */
 export async function exportAccountData(db: Db, userId: number): Promise<Record<string, unknown>> {

@@ -1,0 +1,128 @@
+import { z } from 'zod';
+import { handle, idParam } from '../../src/shared/schemas/accounts';
+import { paths } from '../../src/shared/paths';
+import { canSee, signedIn } from '../auth/policy';
+import { buildResource } from '../auth/resources';
+import { HttpError } from '../http/http-error';
+import { defineRoute } from '../http/registry';
+import { getWorkbench } from '../services/workbench';
+import { sql } from 'kysely';
+
+const slug = z.string().regex(/^[a-z0-9-]{1,80}$/);
+
+export const workbenchRoutes = [
+  defineRoute({
+    method: 'get',
+    path: '/workbench',
+    summary: "The signed-in creator's builds, drafts, scheduled episodes, trash and transfers offered",
+    action: 'account.self',
+    handler: ({ deps, actor }) => getWorkbench(deps.db, signedIn(actor).userId),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/creators/:handle/builds/:buildSlug',
+    summary: 'Find a build by its address; a former slug answers 301 to the current one',
+    action: 'site.read',
+    params: z.object({ handle, buildSlug: slug }),
+    handler: async ({ deps, actor, params, res }) => {
+      const owner = await deps.db
+        .selectFrom('users')
+        .select('id')
+        .where(sql`lower(handle)`, '=', params.handle)
+        .executeTakeFirst();
+      if (!owner) throw new HttpError(404, 'not_found', 'Not found');
+      let b = await deps.db
+        .selectFrom('builds')
+        .select(['id', 'slug', 'visibility', 'deleted_at', 'pending_transfer_to'])
+        .where('owner_id', '=', owner.id)
+        .where('slug', '=', params.buildSlug)
+        .executeTakeFirst();
+      let moved = false;
+      if (!b) {
+        const former = await deps.db
+          .selectFrom('build_slugs')
+          .select('build_id')
+          .where('owner_id', '=', owner.id)
+          .where('slug', '=', params.buildSlug)
+          .executeTakeFirst();
+        if (former)
+          b = await deps.db
+            .selectFrom('builds')
+            .select(['id', 'slug', 'visibility', 'deleted_at', 'pending_transfer_to'])
+            .where('id', '=', former.build_id)
+            .executeTakeFirst();
+        moved = b !== undefined;
+      }
+      if (
+        !b ||
+        !canSee(actor, {
+          kind: 'build',
+          id: b.id,
+          visibility: b.visibility,
+          deleted: b.deleted_at !== null,
+          pendingTransferTo: b.pending_transfer_to,
+        })
+      )
+        throw new HttpError(404, 'not_found', 'Not found');
+      const current = await deps.db
+        .selectFrom('users')
+        .select('handle')
+        .innerJoin('builds', 'builds.owner_id', 'users.id')
+        .where('builds.id', '=', b.id)
+        .executeTakeFirstOrThrow();
+      const path = paths.build(current.handle, b.slug);
+      if (moved) {
+        res.status(301).setHeader('location', `/api/creators/${encodeURIComponent(current.handle)}/builds/${encodeURIComponent(b.slug)}`);
+        return { buildId: b.id, path, movedFrom: params.buildSlug };
+      }
+      return { buildId: b.id, path, movedFrom: null };
+    },
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/builds/:buildId/episodes-by-slug/:episodeSlug',
+    summary: 'Find an episode of a build by its slug; a former slug answers 301 to the current one',
+    action: 'episode.read',
+    params: z.object({ buildId: idParam, episodeSlug: slug }),
+    resource: buildResource,
+    handler: async ({ deps, actor, params, res }) => {
+      let e = await deps.db
+        .selectFrom('episodes')
+        .select(['id', 'slug', 'status', 'deleted_at'])
+        .where('build_id', '=', params.buildId)
+        .where('slug', '=', params.episodeSlug)
+        .executeTakeFirst();
+      let moved = false;
+      if (!e) {
+        const former = await deps.db
+          .selectFrom('episode_slugs')
+          .select('episode_id')
+          .where('build_id', '=', params.buildId)
+          .where('slug', '=', params.episodeSlug)
+          .executeTakeFirst();
+        if (former)
+          e = await deps.db
+            .selectFrom('episodes')
+            .select(['id', 'slug', 'status', 'deleted_at'])
+            .where('id', '=', former.episode_id)
+            .executeTakeFirst();
+        moved = e !== undefined;
+      }
+      const build = await deps.db.selectFrom('builds').select(['visibility']).where('id', '=', params.buildId).executeTakeFirstOrThrow();
+      if (
+        !e ||
+        !canSee(actor, {
+          kind: 'episode',
+          id: e.id,
+          buildId: params.buildId,
+          visibility: build.visibility,
+          status: e.status,
+          deleted: e.deleted_at !== null,
+        })
+      )
+        throw new HttpError(404, 'not_found', 'Not found');
+      if (moved) res.status(301).setHeader('location', `/api/builds/${params.buildId}/episodes-by-slug/${encodeURIComponent(e.slug)}`);
+      return { episodeId: e.id, slug: e.slug, movedFrom: moved ? params.episodeSlug : null };
+    },
+  }),
+];
