@@ -24,12 +24,10 @@ async function versioned(deps: AppDeps, res: Response, id: number, write: () => 
     await write();
   } catch (err) {
     if (!(err instanceof VersionConflict)) throw err;
-    res
-      .status(409)
-      .json({
-        error: { code: 'version_conflict', message: 'This episode was changed in another tab or by someone else' },
-        current: err.current,
-      });
+    res.status(409).json({
+      error: { code: 'version_conflict', message: 'This episode was changed in another tab or by someone else' },
+      current: err.current,
+    });
     return undefined;
   }
   return present(deps, id);

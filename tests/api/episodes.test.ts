@@ -121,23 +121,34 @@ describe('episodes', () => {
     expect(stale.body.current.version).toBe(ep.version + 1);
   });
 
-  it('validates chapters and points at the row', async () => {
+  it('keeps the unfinished chapters of a draft, and refuses to publish them, pointing at the row', async () => {
     const b = await newBuild('Chapters');
     const ep = await newEpisode(b.id);
-    const chapters = [
+    const chapters: Array<{ startSeconds: number; title: string; systemKey: string | null; notes: string | null }> = [
       { startSeconds: 0, title: 'Intro', systemKey: null, notes: null },
       { startSeconds: 5, title: 'Too soon', systemKey: null, notes: null },
     ];
-    const bad = await editor.request('PATCH', `/api/episodes/${ep.id}`, { version: ep.version, chapters });
-    expect(bad.status).toBe(400);
-    expect(Object.keys(bad.body.error.fields)).toContain('chapters.0.startSeconds');
+    const draft = await editor.request('PATCH', `/api/episodes/${ep.id}`, { version: ep.version, chapters, writeUp: doc('Notes.') });
+    expect(draft.status).toBe(200);
+    const refused = await editor.post(`/api/episodes/${ep.id}/publish`, { version: draft.body.version });
+    expect(refused.status).toBe(422);
+    expect(Object.keys(refused.body.error.fields)).toContain('chapters.0.startSeconds');
+
     chapters[1]!.startSeconds = 10; // exactly 10 s long is allowed (the issue's rule)
     chapters.push({ startSeconds: 95, title: 'Caliper off', systemKey: 'brakes', notes: null });
-    const ok = await editor.request('PATCH', `/api/episodes/${ep.id}`, { version: ep.version, chapters });
+    const ok = await editor.request('PATCH', `/api/episodes/${ep.id}`, { version: draft.body.version, chapters });
     expect(ok.status).toBe(200);
     expect(ok.body.chapters.map((c: { startSeconds: number }) => c.startSeconds)).toEqual([0, 10, 95]);
     // A chapter on the brakes (safety-critical by default) puts the caution bar on the episode.
     expect(ok.body.needsCaution).toBe(true);
+    expect((await editor.post(`/api/episodes/${ep.id}/publish`, { version: ok.body.version })).status).toBe(200);
+
+    const unknownSystem = await editor.request('PATCH', `/api/episodes/${ep.id}`, {
+      version: ok.body.version + 1,
+      chapters: [{ ...chapters[0]!, systemKey: 'warp-drive' }],
+    });
+    expect(unknownSystem.status).toBe(400);
+    expect(unknownSystem.body.error.fields).toHaveProperty('chapters.0.systemKey');
   });
 
   it('stores the write-up as JSON, refuses unknown nodes, and gives readers sanitised HTML', async () => {
