@@ -1,13 +1,29 @@
 import { hydrate } from '@tanstack/react-query';
 import { StrictMode } from 'react';
 import { createRoot, hydrateRoot } from 'react-dom/client';
-import { createBrowserRouter, RouterProvider } from 'react-router';
+import { createBrowserRouter, matchRoutes, RouterProvider, type RouteObject } from 'react-router';
 import { HYDRATION_SCRIPT_ID, type HydrationPayload } from './app/hydration-data';
 import { Providers } from './app/providers';
 import { createRoutes } from './app/routes';
 import { createApiClient } from './lib/api-client';
 import { createQueryClient } from './lib/query-client';
 import './styles.css';
+
+/**
+ * Lazy route modules (the episode editor) that match the first URL are loaded before hydrating:
+ * otherwise the router renders its loading fallback over the server's HTML and hydration fails.
+ */
+async function loadLazyMatches(routes: RouteObject[]): Promise<void> {
+  const matches = matchRoutes(routes, window.location) ?? [];
+  await Promise.all(
+    matches
+      .filter((m) => typeof m.route.lazy === 'function')
+      .map(async (m) => {
+        const mod = await (m.route.lazy as () => Promise<Partial<RouteObject>>)();
+        Object.assign(m.route, mod, { lazy: undefined });
+      }),
+  );
+}
 
 declare global {
   interface Window {
@@ -25,7 +41,9 @@ if (payload) {
   window.__staticRouterHydrationData = payload.router;
 }
 
-const router = createBrowserRouter(createRoutes({ queryClient, api }));
+const routes = createRoutes({ queryClient, api });
+await loadLazyMatches(routes);
+const router = createBrowserRouter(routes);
 const container = document.getElementById('root');
 if (!container) throw new Error('#root is missing from index.html');
 

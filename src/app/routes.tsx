@@ -12,6 +12,10 @@ import { NotFound } from '../routes/not-found';
 import { primeSession, requireAccount } from '../routes/route-guards';
 import { SignInPage } from '../routes/sign-in';
 import { SignInLinkPage } from '../routes/sign-in-link';
+import { workbenchLoader, WorkbenchPage } from '../routes/workbench';
+import { workbenchBuildLoader, WorkbenchBuildPage } from '../routes/workbench-build';
+import { NewBuildPage } from '../routes/workbench-build-new';
+import { buildSettingsLoader, BuildSettingsPage } from '../routes/workbench-build-settings';
 import { RouteErrorBoundary } from './error-boundary';
 import { Shell, ShellLoading } from './shell';
 
@@ -63,6 +67,23 @@ export function createRoutes({ queryClient, api }: RouteDeps): RouteObject[] {
         { path: 'account', id: 'account-settings', loader: signedIn, Component: AccountSettingsPage },
         { path: 'account/builds', id: 'account-builds', loader: signedIn, Component: AccountBuildsPage },
         { path: 'account/builds/:buildId/team', id: 'build-team', loader: buildTeamLoader(deps), Component: BuildTeamPage },
+        { path: 'workbench', id: 'workbench', loader: workbenchLoader(deps), Component: WorkbenchPage },
+        { path: 'workbench/builds/new', id: 'workbench-build-new', loader: signedIn, Component: NewBuildPage },
+        { path: 'workbench/builds/:buildId', id: 'workbench-build', loader: workbenchBuildLoader(deps), Component: WorkbenchBuildPage },
+        {
+          path: 'workbench/builds/:buildId/settings',
+          id: 'workbench-build-settings',
+          loader: buildSettingsLoader(deps),
+          Component: BuildSettingsPage,
+        },
+        // A lazy module (the editor and Tiptap load only here); it reads its data through hooks, so the
+        // loader only sends visitors to sign in.
+        {
+          path: 'workbench/episodes/:episodeId/edit',
+          id: 'episode-editor',
+          loader: signedIn,
+          lazy: () => import('../routes/episode-editor'),
+        },
         { path: 'admin/accounts', id: 'admin-accounts', loader: adminAccountsLoader(deps), Component: AdminAccountsPage },
         { path: '*', id: NOT_FOUND_ROUTE_ID, Component: NotFound },
       ],

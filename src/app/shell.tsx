@@ -4,6 +4,7 @@ import { useSession } from '../features/accounts/api/get-session';
 import { AccountMenu, type AccountMenuItem } from '../features/accounts/components/account-menu';
 import { accountPaths } from '../features/accounts/paths';
 import { adminPaths } from '../features/admin/paths';
+import { workbenchPaths } from '../features/workbench/paths';
 import { Notice } from '../components/ui/notice';
 import { StateMessage } from '../components/ui/state-message';
 import { paths } from '../shared/paths';
@@ -39,10 +40,13 @@ function navClass({ isActive }: { isActive: boolean }): string {
 
 /**
  * The account menu's entries: only what this person may use (the server enforces every guard
- * again). Later screens add theirs here: Workbench, Inbox, Sponsor summary, Moderation queue.
+ * again). Later screens add theirs here: Inbox, Sponsor summary, Moderation queue.
  */
 export function accountMenuItems(account: Account): AccountMenuItem[] {
-  const items: AccountMenuItem[] = [{ label: 'Account settings', to: accountPaths.settings() }];
+  const items: AccountMenuItem[] = [
+    { label: 'Workbench', to: workbenchPaths.home() },
+    { label: 'Account settings', to: accountPaths.settings() },
+  ];
   if (account.builds.some((b) => b.role === 'owner')) items.push({ label: 'Build teams', to: accountPaths.builds() });
   if (account.isAdmin) items.push({ label: 'Accounts', to: adminPaths.accounts() });
   return items;
