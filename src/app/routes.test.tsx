@@ -1,12 +1,8 @@
 // @vitest-environment happy-dom
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { cleanup, fireEvent, render, screen, waitFor, within } from '@testing-library/react';
-import { createMemoryRouter, RouterProvider } from 'react-router';
+import { cleanup, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it } from 'vitest';
-import { createApiClient } from '../lib/api-client';
-import { ApiProvider } from '../lib/api-context';
 import type { Account } from '../shared/schemas/accounts';
-import { createRoutes } from './routes';
+import { json, renderApp as renderWith, type Answer } from '../routes/workbench-test-app';
 
 const owner: Account = {
   id: 3,
@@ -21,36 +17,16 @@ const owner: Account = {
   sponsors: [],
 };
 
-function json(status: number, body: unknown): Response {
-  return new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } });
-}
-
-type Answer = (method: string, url: string, body: unknown) => Response | undefined;
-
+/** The shared app-render helper, with the front page's list answered and calls kept as "METHOD path". */
 function renderApp(url: string, signedIn: Account | null, answer: Answer = () => undefined) {
   const calls: string[] = [];
-  const fakeFetch: typeof fetch = async (input, init) => {
-    const method = init?.method ?? 'GET';
-    const path = String(input);
+  const { router } = renderWith(url, signedIn, (method, path, body) => {
     calls.push(`${method} ${path}`);
-    const body: unknown = typeof init?.body === 'string' ? JSON.parse(init.body) : undefined;
-    const custom = answer(method, path, body);
-    if (custom) return custom;
-    if (path === '/api/session') return json(200, { account: signedIn });
-    if (path === '/api/csrf-token') return json(200, { token: 'csrf-token-value' });
-    if (path === '/api/episodes?page=1&perPage=12') return json(200, { items: [], page: 1, perPage: 12, total: 0 });
-    return json(404, { error: { code: 'not_found', message: 'Not found' } });
-  };
-  const queryClient = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-  const api = createApiClient({ fetch: fakeFetch });
-  const router = createMemoryRouter(createRoutes({ queryClient, api }), { initialEntries: [url] });
-  render(
-    <QueryClientProvider client={queryClient}>
-      <ApiProvider client={api}>
-        <RouterProvider router={router} />
-      </ApiProvider>
-    </QueryClientProvider>,
-  );
+    return (
+      answer(method, path, body) ??
+      (path === '/api/episodes?page=1&perPage=12' ? json(200, { items: [], page: 1, perPage: 12, total: 0 }) : undefined)
+    );
+  });
   return { calls, router };
 }
 
