@@ -59,11 +59,10 @@ async function vitest(project: string, env: NodeJS.ProcessEnv): Promise<StepResu
   const seconds = (Date.now() - started) / 1000;
   if (!existsSync(out)) return { name: `${project} tests`, passed: 0, failed: 1, skipped: 0, seconds };
   const r = JSON.parse(readFileSync(out, 'utf8')) as VitestJson;
-  // A suite that failed to load has no failed test of its own: count it, so it cannot pass silently.
-  const failed =
-    r.numFailedTests +
-    (r.numFailedTestSuites > 0 && r.numFailedTests === 0 ? r.numFailedTestSuites : 0) +
-    (code !== 0 && r.success ? 1 : 0);
+  // A suite that failed to load has no failed test of its own, and a failed global setup (or "no test
+  // files") fails the run with none at all: count those, so a step can never pass silently.
+  let failed = r.numFailedTests + (r.numFailedTestSuites > 0 && r.numFailedTests === 0 ? r.numFailedTestSuites : 0);
+  if (code !== 0 && failed === 0) failed = 1;
   return { name: `${project} tests`, passed: r.numPassedTests, failed, skipped: r.numPendingTests + r.numTodoTests, seconds };
 }
 
