@@ -10,6 +10,7 @@ import { csrf } from './http/csrf';
 import { apiNotFound, errorHandler } from './http/error-handler';
 import { buildApiRouter } from './http/registry';
 import { routeRegistry } from './routes';
+import { feedRouter } from './feeds/atom';
 import { createPageRenderer, distPaths } from './ssr/page-renderer';
 
 /** Express's trust-proxy value from config: a hop count, true/false, or names/addresses. */
@@ -78,11 +79,13 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api', api);
   app.use('/auth', sessions, githubAuthRouter(deps));
 
+  app.use(feedRouter(deps));
+
   const { client } = distPaths(config.DIST_DIR);
   // Hashed assets never change under their name: cache them for a year.
   app.use('/assets', express.static(path.join(client, 'assets'), { immutable: true, maxAge: '365d', index: false, fallthrough: false }));
   app.use(express.static(client, { index: false, maxAge: config.NODE_ENV === 'production' ? '1h' : 0 }));
-  app.get('/{*splat}', createPageRenderer(config.DIST_DIR));
+  app.get('/{*splat}', createPageRenderer(config.DIST_DIR, config.PUBLIC_URL));
 
   app.use(errorHandler);
   return app;

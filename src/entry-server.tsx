@@ -14,13 +14,15 @@ export interface RenderInput {
   apiBaseUrl: string;
   /** The visitor's cookie header, forwarded so loaders see what the visitor may see. */
   cookie?: string;
+  /** The site's public address (PUBLIC_URL), for canonical and share links. */
+  publicUrl: string;
 }
 
 export type RenderResult =
   { type: 'response'; response: Response } | { type: 'page'; status: number; head: string; html: string; data: string };
 
 /** Renders one public page on the server: run loaders, render, and collect hydration data. */
-export async function render({ request, apiBaseUrl, cookie }: RenderInput): Promise<RenderResult> {
+export async function render({ request, apiBaseUrl, cookie, publicUrl }: RenderInput): Promise<RenderResult> {
   const queryClient = createQueryClient();
   const api = createApiClient({ baseUrl: apiBaseUrl, headers: cookie ? { cookie } : {} });
   const handler = createStaticHandler(createRoutes({ queryClient, api }));
@@ -28,9 +30,10 @@ export async function render({ request, apiBaseUrl, cookie }: RenderInput): Prom
   if (context instanceof Response) return { type: 'response', response: context };
 
   const router = createStaticRouter(handler.dataRoutes, context);
+  const site = { publicUrl: publicUrl.replace(/\/$/, '') };
   const markup = renderToString(
     <StrictMode>
-      <Providers queryClient={queryClient} api={api}>
+      <Providers queryClient={queryClient} api={api} site={site}>
         <StaticRouterProvider router={router} context={context} hydrate={false} />
       </Providers>
     </StrictMode>,
@@ -43,6 +46,7 @@ export async function render({ request, apiBaseUrl, cookie }: RenderInput): Prom
       errors: serializeRouteErrors(context.errors),
     },
     query: dehydrate(queryClient),
+    site,
   };
   const notFound = context.matches.some((m) => m.route.id === NOT_FOUND_ROUTE_ID);
   queryClient.clear();

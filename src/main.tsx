@@ -49,7 +49,7 @@ if (!container) throw new Error('#root is missing from index.html');
 
 const app = (
   <StrictMode>
-    <Providers queryClient={queryClient} api={api}>
+    <Providers queryClient={queryClient} api={api} site={payload?.site ?? { publicUrl: window.location.origin }}>
       <RouterProvider router={router} />
     </Providers>
   </StrictMode>

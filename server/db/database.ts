@@ -175,6 +175,9 @@ export interface EpisodesTable {
   published_at: NullableTimestamp;
   write_up: ColumnType<unknown, string | undefined, string>;
   write_up_html: Generated<string>;
+  /** Kept by triggers for search (migration 2026-12-02_1600): the write-up's text, the chapter titles. */
+  write_up_text: Generated<string>;
+  chapter_titles: Generated<string>;
   video_url: string | null;
   duration_seconds: number | null;
   minutes_worked: number | null;

@@ -1,14 +1,17 @@
+import { sql } from 'kysely';
 import type { Db } from './kysely';
+import { isPublishedEpisode } from './reading.queries';
 
-/** Published episodes of public builds, newest first, with their build and creator. */
-export async function listLatestEpisodes(db: Db, { limit, offset }: { limit: number; offset: number }) {
-  const base = db
+/** Published episodes of public builds, newest first, with their build and creator (optionally one creator's). */
+export async function listLatestEpisodes(db: Db, { limit, offset, ownerId }: { limit: number; offset: number; ownerId?: number }) {
+  let base = db
     .selectFrom('episodes as e')
     .innerJoin('builds as b', 'b.id', 'e.build_id')
     .innerJoin('users as u', 'u.id', 'b.owner_id')
-    .where('e.status', '=', 'published')
-    .where('e.published_at', '<=', new Date())
-    .where('b.visibility', '=', 'public');
+    .where(isPublishedEpisode)
+    .where('b.visibility', '=', 'public')
+    .where('b.deleted_at', 'is', null);
+  if (ownerId !== undefined) base = base.where('b.owner_id', '=', ownerId);
   const [rows, count] = await Promise.all([
     base
       .select([
@@ -29,7 +32,7 @@ export async function listLatestEpisodes(db: Db, { limit, offset }: { limit: num
       .limit(limit)
       .offset(offset)
       .execute(),
-    base.select((eb) => eb.fn.countAll<number>().as('n')).executeTakeFirstOrThrow(),
+    base.select(sql<number>`count(*)::int`.as('n')).executeTakeFirstOrThrow(),
   ]);
   return { rows, total: count.n };
 }

@@ -4,6 +4,7 @@ import { adminRoutes } from './admin';
 import { buildRoutes } from './builds';
 import { episodeEditorRoutes } from './episode-editor';
 import { openItemRoutes } from './open-items';
+import { readingRoutes } from './reading';
 import { workbenchRoutes } from './workbench';
 import { episodeRoutes } from './episodes';
 import { healthRoutes } from './health';
@@ -22,4 +23,5 @@ export const routeRegistry: readonly RouteSpec[] = [
   ...episodeEditorRoutes,
   ...openItemRoutes,
   ...workbenchRoutes,
+  ...readingRoutes,
 ];

@@ -34,7 +34,7 @@ function toWebRequest(req: ExpressRequest): Request {
  * Server rendering for every page route: runs the route's loaders, renders React to HTML and
  * embeds hydration data as JSON (no inline script, so the CSP forbids all inline scripts).
  */
-export function createPageRenderer(distDir: string): RequestHandler {
+export function createPageRenderer(distDir: string, publicUrl: string): RequestHandler {
   const paths = distPaths(distDir);
   let bundle: Promise<Bundle> | undefined;
   const load = (): Promise<Bundle> =>
@@ -56,7 +56,7 @@ export function createPageRenderer(distDir: string): RequestHandler {
       res.status(503).type('text/plain').send('The client has not been built yet. Run `npm run build` (npm start does it for you).');
       return;
     }
-    const result = await loaded.render({ request: toWebRequest(req), apiBaseUrl: selfBaseUrl(req), cookie: req.headers.cookie });
+    const result = await loaded.render({ request: toWebRequest(req), apiBaseUrl: selfBaseUrl(req), cookie: req.headers.cookie, publicUrl });
     if (result.type === 'response') {
       const location = result.response.headers.get('location');
       if (location && result.response.status >= 300 && result.response.status < 400) {

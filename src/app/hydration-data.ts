@@ -10,6 +10,8 @@ export interface HydrationPayload {
     errors: Record<string, unknown> | null;
   };
   query: DehydratedState;
+  /** The site's public address, so canonical and share links match on the server and in the browser. */
+  site: { publicUrl: string };
 }
 
 /** Serialises the payload so it is safe inside a <script type="application/json"> element. */

@@ -2,6 +2,7 @@ import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
 import { useEffect, type ReactNode } from 'react';
 import type { ApiClient } from '../lib/api-client';
 import { ApiProvider } from '../lib/api-context';
+import { SiteProvider, type Site } from '../lib/site-context';
 
 /** Marks the document once React has taken over the server's HTML (browser tests wait for it). */
 function HydrationMarker() {
@@ -12,12 +13,24 @@ function HydrationMarker() {
 }
 
 /** Everything every screen needs from context, on the server and in the browser alike. */
-export function Providers({ queryClient, api, children }: { queryClient: QueryClient; api: ApiClient; children: ReactNode }) {
+export function Providers({
+  queryClient,
+  api,
+  site = { publicUrl: '' },
+  children,
+}: {
+  queryClient: QueryClient;
+  api: ApiClient;
+  site?: Site;
+  children: ReactNode;
+}) {
   return (
     <QueryClientProvider client={queryClient}>
       <ApiProvider client={api}>
-        {children}
-        <HydrationMarker />
+        <SiteProvider site={site}>
+          {children}
+          <HydrationMarker />
+        </SiteProvider>
       </ApiProvider>
     </QueryClientProvider>
   );

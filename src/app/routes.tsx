@@ -5,11 +5,16 @@ import type { ApiClient } from '../lib/api-client';
 import { AccountBuildsPage } from '../routes/account-builds';
 import { AccountSettingsPage } from '../routes/account-settings';
 import { adminAccountsLoader, AdminAccountsPage } from '../routes/admin-accounts';
+import { buildPageLoader, BuildPage } from '../routes/build-page';
+import { buildsDirectoryLoader, BuildsDirectoryPage } from '../routes/builds-directory';
 import { buildTeamLoader, BuildTeamPage } from '../routes/build-team';
+import { creatorPageLoader, CreatorPage } from '../routes/creator-page';
+import { episodePageLoader, EpisodePage } from '../routes/episode-page';
 import { FrontPage, frontPageQuery } from '../routes/front-page';
 import { InvitationAcceptPage } from '../routes/invitation-accept';
 import { NotFound } from '../routes/not-found';
 import { primeSession, requireAccount } from '../routes/route-guards';
+import { searchPageLoader, SearchPage } from '../routes/search-page';
 import { SignInPage } from '../routes/sign-in';
 import { SignInLinkPage } from '../routes/sign-in-link';
 import { workbenchLoader, WorkbenchPage } from '../routes/workbench';
@@ -61,6 +66,16 @@ export function createRoutes({ queryClient, api }: RouteDeps): RouteObject[] {
           },
           Component: FrontPage,
         },
+        { path: 'builds', id: 'builds-directory', loader: buildsDirectoryLoader(deps), Component: BuildsDirectoryPage },
+        { path: 'builds/:handle/:buildSlug', id: 'build-page', loader: buildPageLoader(deps), Component: BuildPage },
+        {
+          path: 'builds/:handle/:buildSlug/episodes/:episodeSlug',
+          id: 'episode-page',
+          loader: episodePageLoader(deps),
+          Component: EpisodePage,
+        },
+        { path: 'creators/:handle', id: 'creator-page', loader: creatorPageLoader(deps), Component: CreatorPage },
+        { path: 'search', id: 'search', loader: searchPageLoader(deps), Component: SearchPage },
         { path: 'sign-in', id: 'sign-in', Component: SignInPage },
         { path: 'sign-in/link', id: 'sign-in-link', Component: SignInLinkPage },
         { path: 'invitations/accept', id: 'invitation-accept', Component: InvitationAcceptPage },

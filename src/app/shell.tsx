@@ -1,5 +1,5 @@
 import { useEffect, useState } from 'react';
-import { Link, NavLink, Outlet, useLocation } from 'react-router';
+import { Form, Link, NavLink, Outlet, useLocation, useSearchParams } from 'react-router';
 import { useSession } from '../features/accounts/api/get-session';
 import { AccountMenu, type AccountMenuItem } from '../features/accounts/components/account-menu';
 import { accountPaths } from '../features/accounts/paths';
@@ -18,7 +18,10 @@ export interface NavItem {
 }
 
 /** The header navigation; later screens add their entries here. */
-export const navItems: readonly NavItem[] = [{ label: 'Latest episodes', to: paths.home(), end: true }];
+export const navItems: readonly NavItem[] = [
+  { label: 'Latest', to: paths.home(), end: true },
+  { label: 'Builds', to: paths.builds() },
+];
 
 export const PRODUCT_NAME = 'Rivet & Reel';
 
@@ -97,6 +100,35 @@ export function SkipLink() {
   );
 }
 
+/** The header's search box: a plain GET form, so it works before (and without) JavaScript. */
+function HeaderSearch() {
+  const { pathname } = useLocation();
+  const [sp] = useSearchParams();
+  const current = pathname === '/search' ? (sp.get('q') ?? '') : '';
+  return (
+    <Form method="get" action="/search" role="search" key={current} className="flex">
+      <label htmlFor="site-search" className="sr-only">
+        Search builds, episodes and chapters
+      </label>
+      <input
+        id="site-search"
+        name="q"
+        type="search"
+        defaultValue={current}
+        maxLength={200}
+        placeholder="Search builds, chapters…"
+        className="min-h-10 w-40 min-w-0 border border-ink-2 bg-[#2E2A26] px-3 text-[15px] text-paper placeholder:text-rule sm:w-56"
+      />
+      <button
+        type="submit"
+        className="min-h-10 border border-l-0 border-ink-2 px-2.5 font-condensed text-[14px] font-semibold tracking-[0.08em] text-paper uppercase hover:bg-ink-2"
+      >
+        Search
+      </button>
+    </Form>
+  );
+}
+
 export function SiteHeader() {
   return (
     <header className="on-ink bg-ink text-paper">
@@ -119,7 +151,8 @@ export function SiteHeader() {
             ))}
           </ul>
         </nav>
-        <div className="ml-auto">
+        <div className="ml-auto flex items-center gap-3">
+          <HeaderSearch />
           <AccountArea />
         </div>
       </div>

@@ -1,5 +1,7 @@
 import { useSearchParams } from 'react-router';
 import { Button, ButtonLink } from '../components/ui/button';
+import { PageMeta } from '../components/ui/page-meta';
+import { Pagination } from '../components/ui/pagination';
 import { StateMessage } from '../components/ui/state-message';
 import { useLatestEpisodes } from '../features/episodes/api/get-latest-episodes';
 import { EpisodeCard } from '../features/episodes/components/episode-card';
@@ -17,7 +19,7 @@ export function frontPageQuery(searchParams: URLSearchParams): LatestEpisodesQue
   return parsed.success ? parsed.data : { page: 1, perPage: FRONT_PAGE_SIZE };
 }
 
-const TITLE = 'Rivet & Reel — restoration builds, episode by episode';
+const TITLE = 'Restoration builds, episode by episode';
 const DESCRIPTION =
   'Old cars, motorcycles, tractors and boats restored on camera: each garage session published as an episode with chapters, parts, costs and torque figures.';
 
@@ -28,8 +30,12 @@ export function FrontPage() {
 
   return (
     <>
-      <title>{TITLE}</title>
-      <meta name="description" content={DESCRIPTION} />
+      <PageMeta
+        title={TITLE}
+        description={DESCRIPTION}
+        canonicalPath={paths.frontPage(query.page)}
+        feed={{ path: paths.feeds.site(), title: 'Rivet & Reel — latest episodes' }}
+      />
       <header className="max-w-measure">
         <h1 className="font-serif text-[27px] leading-tight font-bold md:text-[38px]">Restoration builds, episode by episode</h1>
         <p className="mt-3 font-serif text-[17px] leading-relaxed text-ink-2">
@@ -94,32 +100,7 @@ function EpisodeList({ data }: { data: LatestEpisodesResponse }) {
           </li>
         ))}
       </ul>
-      <Pagination page={data.page} totalPages={totalPages} />
+      <Pagination page={data.page} totalPages={totalPages} hrefFor={paths.frontPage} label="Pages of latest episodes" />
     </>
-  );
-}
-
-function Pagination({ page, totalPages }: { page: number; totalPages: number }) {
-  if (totalPages <= 1) return null;
-  return (
-    <nav aria-label="Pages of latest episodes" className="mt-8 flex flex-wrap items-center justify-between gap-3">
-      {page > 1 ? (
-        <ButtonLink to={paths.frontPage(page - 1)} rel="prev">
-          <span aria-hidden="true">←</span> Previous page
-        </ButtonLink>
-      ) : (
-        <span />
-      )}
-      <p className="order-first w-full text-center font-condensed text-sm font-semibold tracking-label text-slate uppercase sm:order-none sm:w-auto">
-        Page <span className="font-mono">{page}</span> of <span className="font-mono">{totalPages}</span>
-      </p>
-      {page < totalPages ? (
-        <ButtonLink to={paths.frontPage(page + 1)} rel="next">
-          Next page <span aria-hidden="true">→</span>
-        </ButtonLink>
-      ) : (
-        <span />
-      )}
-    </nav>
   );
 }

@@ -1,0 +1,16 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { ApiClient } from '../../../lib/api-client';
+import { useApi } from '../../../lib/api-context';
+import { episodeReading } from '../../../shared/schemas/reading';
+import { readingKeys } from './keys';
+
+export function episodeReadingOptions(api: ApiClient, episodeId: number) {
+  return queryOptions({
+    queryKey: readingKeys.episode(episodeId),
+    queryFn: ({ signal }) => api.get(`/api/episodes/${episodeId}/reading`, episodeReading, signal),
+  });
+}
+
+export function useEpisodeReading(episodeId: number) {
+  return useQuery(episodeReadingOptions(useApi(), episodeId));
+}

@@ -1,0 +1,195 @@
+import { useEffect, useState } from 'react';
+import { Link, useLoaderData } from 'react-router';
+import { Button } from '../components/ui/button';
+import { CautionBar } from '../components/ui/caution-bar';
+import { DateText } from '../components/ui/date-text';
+import { clipDescription, PageMeta } from '../components/ui/page-meta';
+import { Plate } from '../components/ui/plate';
+import { StateMessage } from '../components/ui/state-message';
+import { formatHours } from '../features/builds/lib/hours';
+import { episodeReadingOptions, useEpisodeReading } from '../features/reading/api/get-episode-reading';
+import { chapterAt, ChapterRail } from '../features/reading/components/chapter-rail';
+import { ChapterSections } from '../features/reading/components/chapter-sections';
+import { EpisodeOpenItems } from '../features/reading/components/episode-open-items';
+import { vehicleLine } from '../features/reading/components/vehicle';
+import { WriteUp } from '../features/reading/components/write-up';
+import { formatTime } from '../shared/chapters';
+import { momentAnchor, parseMomentAnchor, paths } from '../shared/paths';
+import type { EpisodeReading } from '../shared/schemas/reading';
+import { needData, resolveEpisodePage } from './reading-loaders';
+import type { LoaderDeps } from './route-guards';
+
+export function episodePageLoader(deps: LoaderDeps) {
+  return async ({ request, params }: { request: Request; params: Record<string, string | undefined> }) => {
+    const { episodeId, buildId } = await resolveEpisodePage(deps, request, params);
+    await needData(deps.queryClient.ensureQueryData(episodeReadingOptions(deps.api, episodeId)));
+    return { episodeId, buildId };
+  };
+}
+
+/** The public episode page: caution, chapters beside the write-up, neighbours, open items. */
+export function EpisodePage() {
+  const { episodeId } = useLoaderData<{ episodeId: number }>();
+  const { data, error, refetch, isFetching } = useEpisodeReading(episodeId);
+  if (!data)
+    return error ? (
+      <StateMessage
+        kind="error"
+        title="This episode could not be loaded."
+        action={
+          <Button onClick={() => void refetch()} disabled={isFetching}>
+            Try again
+          </Button>
+        }
+      />
+    ) : (
+      <StateMessage kind="loading" title="Loading the episode…" />
+    );
+  return <Episode episode={data} />;
+}
+
+/** The chapter named by the address's moment (`#at-312`), worked out after hydration. */
+function useActiveChapter(chapters: EpisodeReading['chapters']): number | null {
+  const [active, setActive] = useState<number | null>(null);
+  useEffect(() => {
+    const follow = () => {
+      const seconds = parseMomentAnchor(window.location.hash);
+      const index = seconds === null ? null : chapterAt(chapters, seconds);
+      setActive(index);
+      // A moment inside a chapter has no element of its own: bring its chapter into view.
+      if (seconds !== null && index !== null && !document.getElementById(momentAnchor(seconds))) {
+        document.getElementById(momentAnchor(chapters[index]!.startSeconds))?.scrollIntoView();
+      }
+    };
+    follow();
+    window.addEventListener('hashchange', follow);
+    return () => window.removeEventListener('hashchange', follow);
+  }, [chapters]);
+  return active;
+}
+
+function Episode({ episode }: { episode: EpisodeReading }) {
+  const { build } = episode;
+  const active = useActiveChapter(episode.chapters);
+  const buildPath = paths.build(build.owner.handle, build.slug);
+  const canonical = paths.episode(build.owner.handle, build.slug, episode.slug);
+  const systems = [...new Map(episode.chapters.flatMap((c) => (c.system ? [[c.system.key, c.system] as const] : []))).values()];
+  const description = clipDescription(
+    episode.summary ??
+      `Episode ${episode.number} of ${build.title}, a ${vehicleLine(build)} restored on camera by ${build.owner.displayName}.`,
+  );
+
+  return (
+    <>
+      <PageMeta
+        title={`Ep. ${episode.number}: ${episode.title} · ${build.title}`}
+        description={description}
+        canonicalPath={canonical}
+        noindex={build.visibility !== 'public' || episode.status !== 'published'}
+        ogType="article"
+        feed={{ path: paths.feeds.build(build.id), title: `${build.title} — new episodes` }}
+      />
+      <nav aria-label="Breadcrumbs" className="font-condensed text-sm font-medium tracking-[0.08em] text-slate uppercase">
+        <Link to={paths.builds()} className="text-slate">
+          Builds
+        </Link>
+        <span aria-hidden="true"> / </span>
+        <Link to={buildPath} className="font-semibold text-ink-2">
+          {build.title}
+        </Link>
+        <span aria-hidden="true"> / </span>
+        <span aria-current="page">Episode {episode.number}</span>
+      </nav>
+
+      {/* The sponsors issue puts the disclosure here, first under the breadcrumbs. */}
+
+      <header className="mt-4">
+        <p className="font-condensed text-[15px] font-semibold tracking-[0.14em] text-oxide uppercase">
+          Episode {episode.number} · {vehicleLine(build)}
+        </p>
+        <h1 className="mt-1.5 max-w-[32ch] font-serif text-[27px] leading-tight font-bold md:text-[38px]">{episode.title}</h1>
+        <p className="mt-2 flex flex-wrap items-center gap-x-4 gap-y-1 text-[15px] text-slate">
+          {episode.status !== 'published' ? (
+            <Plate tone="caution">{episode.status === 'draft' ? 'Draft preview' : 'Scheduled'}</Plate>
+          ) : null}
+          {episode.publishedAt ? (
+            <span>
+              Published <DateText iso={episode.publishedAt} />
+            </span>
+          ) : null}
+          {episode.durationSeconds ? (
+            <span>
+              <span className="font-mono">{formatTime(episode.durationSeconds)}</span> video
+            </span>
+          ) : null}
+          {episode.hoursWorked !== null ? <span>{formatHours(episode.hoursWorked)} in the workshop</span> : null}
+          <span>
+            by{' '}
+            <Link to={paths.creator(build.owner.handle)} className="font-semibold">
+              {build.owner.displayName}
+            </Link>
+          </span>
+          {systems.map((s) => (
+            <Plate key={s.key} tone={s.safetyCritical ? 'oxide' : 'ink'}>
+              {s.name}
+            </Plate>
+          ))}
+        </p>
+        {episode.summary ? <p className="mt-3 max-w-measure font-serif text-[17px] leading-relaxed text-ink-2">{episode.summary}</p> : null}
+        {episode.caution.length ? (
+          <div className="mt-4">
+            <CautionBar texts={episode.caution} />
+          </div>
+        ) : null}
+        {episode.videoUrl ? (
+          <p className="mt-4">
+            <a
+              href={episode.videoUrl}
+              rel="noopener noreferrer"
+              className="inline-flex min-h-11 items-center border-[1.5px] border-ink bg-ink px-4 font-condensed text-[15px] font-semibold tracking-label text-paper uppercase no-underline hover:bg-ink-2"
+            >
+              Watch the video <span aria-hidden="true">&nbsp;▸</span>
+            </a>
+          </p>
+        ) : null}
+      </header>
+
+      <div className="mt-7 grid grid-cols-1 gap-6 lg:grid-cols-[240px_minmax(0,1fr)] lg:gap-10">
+        <ChapterRail chapters={episode.chapters} active={active} />
+        <div className="min-w-0">
+          <article aria-label="Write-up">
+            <WriteUp html={episode.writeUpHtml} />
+          </article>
+          <ChapterSections chapters={episode.chapters} active={active} />
+          {/* Later issues add their sections here: the parts table, figures, and posts by chapter. */}
+          <EpisodeOpenItems episode={episode} />
+          <EpisodeNeighbours episode={episode} />
+        </div>
+      </div>
+    </>
+  );
+}
+
+function EpisodeNeighbours({ episode }: { episode: EpisodeReading }) {
+  const { build, previous, next } = episode;
+  if (!previous && !next) return null;
+  const link = (e: NonNullable<EpisodeReading['previous']>) => paths.episode(build.owner.handle, build.slug, e.slug);
+  return (
+    <nav aria-label="More episodes of this build" className="mt-10 grid grid-cols-1 gap-3 sm:grid-cols-2">
+      {previous ? (
+        <Link to={link(previous)} rel="prev" className="block border border-rule bg-card px-4 py-3 no-underline hover:border-ink">
+          <span className="label-condensed block">← Previous · Ep. {previous.number}</span>
+          <span className="mt-1 block font-serif font-bold text-ink">{previous.title}</span>
+        </Link>
+      ) : (
+        <span className="hidden sm:block" />
+      )}
+      {next ? (
+        <Link to={link(next)} rel="next" className="block border border-rule bg-card px-4 py-3 text-right no-underline hover:border-ink">
+          <span className="label-condensed block">Next · Ep. {next.number} →</span>
+          <span className="mt-1 block font-serif font-bold text-ink">{next.title}</span>
+        </Link>
+      ) : null}
+    </nav>
+  );
+}
