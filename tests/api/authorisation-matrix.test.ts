@@ -166,6 +166,12 @@ const matrix: Record<string, { request: (w: World) => { path: string; body?: unk
     request: (w) => ({ path: `/api/builds/${w.ids.buildA}/episodes-by-slug/${w.slugs.draft}` }),
     expect: draftTeam(200),
   },
+  // Reading: the public side is open to all; a draft's page exists only for its build team.
+  'GET /builds': { request: () => ({ path: '/api/builds' }), expect: all(200) },
+  'GET /builds/:buildId/overview': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}/overview` }), expect: all(200) },
+  'GET /episodes/:episodeId/reading': { request: (w) => ({ path: `/api/episodes/${w.ids.draft}/reading` }), expect: draftTeam(200) },
+  'GET /creators/:handle': { request: (w) => ({ path: `/api/creators/${w.slugs.owner}` }), expect: all(200) },
+  'GET /search': { request: () => ({ path: '/api/search?q=coolant' }), expect: all(200) },
 };
 
 let app: TestApp;
@@ -301,5 +307,9 @@ describe('authorisation matrix', () => {
     const invitations = await world.clients.admin.get(`/api/builds/${world.ids.buildA}/invitations`);
     expect(invitations.status).toBe(404);
     expect(invitations.body.error.code).toBe('not_found');
+    // The build page's data of a private build: its team only.
+    const overview: Partial<Row> = {};
+    for (const actor of ACTORS) overview[actor] = (await world.clients[actor].get(`/api/builds/${world.ids.buildA}/overview`)).status;
+    expect(overview).toEqual({ visitor: 404, follower: 404, editor: 200, owner: 200, otherOwner: 404, sponsorMember: 404, admin: 404 });
   });
 });
