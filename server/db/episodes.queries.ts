@@ -24,6 +24,10 @@ export async function listLatestEpisodes(db: Db, { limit, offset, ownerId }: { l
         'b.id as build_id',
         'b.slug as build_slug',
         'b.title as build_title',
+        'b.vehicle_kind',
+        'b.vehicle_make',
+        'b.vehicle_model',
+        'b.vehicle_year',
         'u.handle',
         'u.display_name',
       ])

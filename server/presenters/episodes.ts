@@ -1,3 +1,4 @@
+import { vehicleLine } from '../../src/shared/vehicle';
 import type { EpisodeListItem } from '../../src/shared/schemas/episodes';
 import type { listLatestEpisodes } from '../db/episodes.queries';
 
@@ -13,7 +14,17 @@ export function presentEpisodeListItem(row: LatestRow): EpisodeListItem {
     summary: row.summary,
     publishedAt: (row.published_at ?? new Date(0)).toISOString(),
     coverUrl: null,
-    build: { id: row.build_id, slug: row.build_slug, title: row.build_title },
+    build: {
+      id: row.build_id,
+      slug: row.build_slug,
+      title: row.build_title,
+      vehicle: vehicleLine({
+        vehicleKind: row.vehicle_kind,
+        vehicleMake: row.vehicle_make,
+        vehicleModel: row.vehicle_model,
+        vehicleYear: row.vehicle_year,
+      }),
+    },
     creator: { handle: row.handle, displayName: row.display_name },
   };
 }

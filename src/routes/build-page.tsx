@@ -7,7 +7,7 @@ import { StateMessage } from '../components/ui/state-message';
 import { formatHours } from '../features/builds/lib/hours';
 import { formatMoney } from '../features/builds/lib/money';
 import { buildOverviewOptions, useBuildOverview } from '../features/reading/api/get-build-overview';
-import { VEHICLE_KIND_LABELS, vehicleLine } from '../features/reading/components/vehicle';
+import { VEHICLE_KIND_LABELS, vehicleLine } from '../shared/vehicle';
 import { paths } from '../shared/paths';
 import type { BuildOverview } from '../shared/schemas/reading';
 import { needData, resolveBuildPage } from './reading-loaders';

@@ -5,7 +5,7 @@ import { Pagination } from '../components/ui/pagination';
 import { StateMessage } from '../components/ui/state-message';
 import { buildDirectoryOptions, useBuildDirectory } from '../features/reading/api/get-build-directory';
 import { BuildCard } from '../features/reading/components/build-card';
-import { VEHICLE_KIND_LABELS } from '../features/reading/components/vehicle';
+import { VEHICLE_KIND_LABELS } from '../shared/vehicle';
 import { paths } from '../shared/paths';
 import { VEHICLE_KINDS } from '../shared/schemas/builds';
 import { buildDirectoryQuery, type BuildDirectoryQuery, type BuildDirectoryResponse } from '../shared/schemas/reading';

@@ -11,7 +11,7 @@ import { episodeReadingOptions, useEpisodeReading } from '../features/reading/ap
 import { chapterAt, ChapterRail } from '../features/reading/components/chapter-rail';
 import { ChapterSections } from '../features/reading/components/chapter-sections';
 import { EpisodeOpenItems } from '../features/reading/components/episode-open-items';
-import { vehicleLine } from '../features/reading/components/vehicle';
+import { vehicleLine } from '../shared/vehicle';
 import { WriteUp } from '../features/reading/components/write-up';
 import { formatTime } from '../shared/chapters';
 import { momentAnchor, parseMomentAnchor, paths } from '../shared/paths';

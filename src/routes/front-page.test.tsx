@@ -17,7 +17,7 @@ function episode(overrides: Partial<EpisodeListItem> = {}): EpisodeListItem {
     summary: 'Freeing the piston and refitting the caliper.',
     publishedAt: '2026-11-28T10:00:00.000Z',
     coverUrl: null,
-    build: { id: 7, slug: 'alderton-175', title: '1968 Alderton 175 Trail' },
+    build: { id: 7, slug: 'alderton-175', title: '1968 Alderton 175 Trail', vehicle: '1968 Alderton 175' },
     creator: { handle: 'moss-garage', displayName: 'Moss Garage' },
     ...overrides,
   };
@@ -65,7 +65,7 @@ describe('FrontPage', () => {
       slug: 'carb-strip',
       title: 'Stripping the carburettor',
       coverUrl: '/media/carb.webp',
-      build: { id: 8, slug: 'pellham-two-stroke', title: '1974 Pellham 125' },
+      build: { id: 8, slug: 'pellham-two-stroke', title: '1974 Pellham 125', vehicle: '1974 Pellham 125' },
       creator: { handle: 'iron-ida', displayName: 'Ida Ironside' },
     });
     const { calls } = renderFrontPage(() => json(200, list([episode(), second], 1, 30)), '/?page=1');

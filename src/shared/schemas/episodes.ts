@@ -11,7 +11,8 @@ export const episodeListItem = z.object({
   summary: z.string().nullable(),
   publishedAt: z.string(),
   coverUrl: z.string().nullable(),
-  build: z.object({ id: z.number().int(), slug: z.string(), title: z.string() }),
+  /** `vehicle` is the vehicle in words ("1976 Marlowe Pipit"). */
+  build: z.object({ id: z.number().int(), slug: z.string(), title: z.string(), vehicle: z.string() }),
   creator: z.object({ handle: z.string(), displayName: z.string() }),
 });
 export type EpisodeListItem = z.infer<typeof episodeListItem>;

@@ -39,6 +39,7 @@ export function EpisodeCard({ episode }: { episode: EpisodeListItem }) {
           <span className="sr-only">, </span>
           {build.title}
         </p>
+        {!build.title.includes(build.vehicle) ? <p className="mt-0.5 text-[14px] text-slate">{build.vehicle}</p> : null}
         <h3 className="mt-1.5 font-serif text-lg leading-snug font-bold">
           <Link to={href} className="text-ink no-underline hover:underline">
             {episode.title}

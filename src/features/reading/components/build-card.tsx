@@ -3,7 +3,7 @@ import { DateText } from '../../../components/ui/date-text';
 import { Plate } from '../../../components/ui/plate';
 import { paths } from '../../../shared/paths';
 import type { BuildCard as BuildCardData } from '../../../shared/schemas/reading';
-import { VEHICLE_KIND_LABELS, vehicleLine } from './vehicle';
+import { VEHICLE_KIND_LABELS, vehicleLine } from '../../../shared/vehicle';
 
 /** One build in a list: kind, vehicle, title, creator, how far the series has got. */
 export function BuildCard({ build, showOwner = true }: { build: BuildCardData; showOwner?: boolean }) {

@@ -1,4 +1,4 @@
-import type { VEHICLE_KINDS } from '../../../shared/schemas/builds';
+import type { VEHICLE_KINDS } from './schemas/builds';
 
 type Kind = (typeof VEHICLE_KINDS)[number];
 
