@@ -46,6 +46,7 @@ const rules = {
   'build.team.read': { signedIn: true, allow: isTeam },
   'build.team.manage': { signedIn: true, allow: isOwner },
   'admin.accounts': { signedIn: true, allow: (a) => a?.isAdmin === true },
+  'admin.suppliers': { signedIn: true, allow: (a) => a?.isAdmin === true },
 } satisfies Record<string, Rule>;
 
 export type PolicyAction = keyof typeof rules;

@@ -51,3 +51,9 @@ export async function openItemResource(deps: AppDeps, params: { openItemId: numb
   const o = await deps.db.selectFrom('open_items').select('opened_in_episode_id').where('id', '=', params.openItemId).executeTakeFirst();
   return o ? episodeResource(deps, { episodeId: o.opened_in_episode_id }) : null;
 }
+
+/** The episode a part line (`:partLineId`) belongs to. */
+export async function partLineResource(deps: AppDeps, params: { partLineId: number }): Promise<Resource | null> {
+  const l = await deps.db.selectFrom('part_lines').select('episode_id').where('id', '=', params.partLineId).executeTakeFirst();
+  return l ? episodeResource(deps, { episodeId: l.episode_id }) : null;
+}

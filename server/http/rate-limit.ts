@@ -8,6 +8,9 @@ export const RATE_LIMITS = {
   'sign-in-link-ip': { points: 10, duration: 60 * 60 },
   'sign-in-link-email': { points: 5, duration: 60 * 60 },
   invitation: { points: 30, duration: 60 * 60 },
+  // New supplier records are site-wide: a typo storm should not fill the list.
+  'supplier-create': { points: 100, duration: 60 * 60 },
+  'ledger-import': { points: 60, duration: 60 * 60 },
 } satisfies Record<string, { points: number; duration: number }>;
 
 export type RateLimitName = keyof typeof RATE_LIMITS;

@@ -4,6 +4,7 @@ import { adminRoutes } from './admin';
 import { buildRoutes } from './builds';
 import { episodeEditorRoutes } from './episode-editor';
 import { openItemRoutes } from './open-items';
+import { partLineRoutes } from './part-lines';
 import { readingRoutes } from './reading';
 import { workbenchRoutes } from './workbench';
 import { episodeRoutes } from './episodes';
@@ -24,4 +25,5 @@ export const routeRegistry: readonly RouteSpec[] = [
   ...openItemRoutes,
   ...workbenchRoutes,
   ...readingRoutes,
+  ...partLineRoutes,
 ];
