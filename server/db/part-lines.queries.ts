@@ -91,13 +91,14 @@ export async function buildBreakdowns(db: Db, scope: Extract<LineScope, { buildI
                coalesce(sum(b_gross) filter (where kind <> 'sale' and status = 'needed'), 0)::bigint as planned
           from (${lines}) x group by system_key)
       select s.key, s.name, s.budget_minor, coalesce(g.spent, 0)::bigint as spent, coalesce(g.committed, 0)::bigint as committed,
-             coalesce(g.planned, 0)::bigint as planned
+             coalesce(g.planned, 0)::bigint as planned, s.position
         from build_systems s left join g on g.system_key = s.key
        where s.build_id = ${scope.buildId}
       union all
-      select null, 'No system', null, g.spent, g.committed, g.planned from g
+      select null, 'No system', null, sum(g.spent)::bigint, sum(g.committed)::bigint, sum(g.planned)::bigint, 1000000 from g
        where g.system_key is null or not exists (select 1 from build_systems s where s.build_id = ${scope.buildId} and s.key = g.system_key)
-      order by 1 nulls last`.execute(db),
+      having count(*) > 0
+      order by position`.execute(db),
     sql<{ supplier_id: number | null; name: string | null; spent: number; lines: number }>`
       select x.supplier_id, s.name, ${SPENT} as spent, count(*)::int as lines
         from (${lines}) x left join suppliers s on s.id = x.supplier_id

@@ -6,6 +6,9 @@ import { Plate } from '../components/ui/plate';
 import { StateMessage } from '../components/ui/state-message';
 import { formatHours } from '../features/builds/lib/hours';
 import { formatMoney } from '../features/builds/lib/money';
+import { buildTotalsOptions, useBuildTotals } from '../features/parts/api/get-build-totals';
+import { SpendCharts } from '../features/parts/components/spend-charts';
+import { SpendSummary } from '../features/parts/components/spend-summary';
 import { buildOverviewOptions, useBuildOverview } from '../features/reading/api/get-build-overview';
 import { VEHICLE_KIND_LABELS, vehicleLine } from '../shared/vehicle';
 import { paths } from '../shared/paths';
@@ -16,7 +19,11 @@ import type { LoaderDeps } from './route-guards';
 export function buildPageLoader(deps: LoaderDeps) {
   return async ({ request, params }: { request: Request; params: Record<string, string | undefined> }) => {
     const { buildId } = await resolveBuildPage(deps, request, params);
-    await needData(deps.queryClient.ensureQueryData(buildOverviewOptions(deps.api, buildId)));
+    await Promise.all([
+      needData(deps.queryClient.ensureQueryData(buildOverviewOptions(deps.api, buildId))),
+      // The spend section shows its own error state; a failure here must not take the page down.
+      deps.queryClient.ensureQueryData(buildTotalsOptions(deps.api, buildId)).catch(() => undefined),
+    ]);
     return { buildId };
   };
 }
@@ -101,7 +108,7 @@ function Build({ build }: { build: BuildOverview }) {
         <a href={paths.feeds.build(build.id)}>Follow new episodes with a feed reader (Atom)</a>
       </p>
 
-      {/* The parts issue adds the spend summary and its charts here. */}
+      <BuildSpend buildId={build.id} />
 
       <section aria-labelledby="episodes-heading" className="mt-10">
         <h2 id="episodes-heading" className="label-condensed border-b-2 border-ink pb-2">
@@ -170,5 +177,31 @@ function Figure({ label, value }: { label: string; value: string }) {
       <dt className="font-condensed text-xs font-semibold tracking-label text-slate uppercase">{label}</dt>
       <dd className="mt-1 font-mono text-xl">{value}</dd>
     </div>
+  );
+}
+
+/** Spend by system against budgets, and over the series (lines of published episodes). */
+function BuildSpend({ buildId }: { buildId: number }) {
+  const { data, error } = useBuildTotals(buildId);
+  return (
+    <section aria-labelledby="spend-heading" className="mt-10">
+      <h2 id="spend-heading" className="label-condensed mb-4 border-b-2 border-ink pb-2">
+        Spend
+      </h2>
+      {data ? (
+        data.totals.lines ? (
+          <div className="space-y-6">
+            <SpendSummary totals={data} />
+            <SpendCharts totals={data} />
+          </div>
+        ) : (
+          <StateMessage kind="empty" title="No parts recorded yet." />
+        )
+      ) : error ? (
+        <StateMessage kind="error" title="The spend figures could not be loaded." />
+      ) : (
+        <StateMessage kind="loading" title="Loading the spend figures…" />
+      )}
+    </section>
   );
 }
