@@ -68,12 +68,23 @@ export async function createEpisode(db: Db, buildId: number, input: EpisodeCreat
 export async function getEpisode(db: Db | Trx, episodeId: number): Promise<Episode | null> {
   const e = await db.selectFrom('episodes').selectAll().where('id', '=', episodeId).executeTakeFirst();
   if (!e) return null;
-  const [chapters, systems] = await Promise.all([
+  const [chapters, systems, partSystems] = await Promise.all([
     db.selectFrom('chapters').selectAll().where('episode_id', '=', episodeId).orderBy('position').execute(),
     db.selectFrom('build_systems').select(['key', 'name', 'safety_critical']).where('build_id', '=', e.build_id).execute(),
+    db
+      .selectFrom('part_lines')
+      .select('system_key')
+      .distinct()
+      .where('episode_id', '=', episodeId)
+      .where('system_key', 'is not', null)
+      .execute(),
   ]);
   const caution = needsCaution(
-    { raisedVehicle: e.raised_vehicle, systemKeys: chapters.flatMap((c) => (c.system_key ? [c.system_key] : [])) },
+    {
+      raisedVehicle: e.raised_vehicle,
+      // Chapters and part lines both name systems (DESIGN.md "Safety").
+      systemKeys: [...chapters, ...partSystems].flatMap((c) => (c.system_key ? [c.system_key] : [])),
+    },
     systems.map((s) => ({ key: s.key, name: s.name, safetyCritical: s.safety_critical })),
   );
   return {

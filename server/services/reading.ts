@@ -182,7 +182,7 @@ export async function getEpisodeReading(db: Db, episodeId: number): Promise<Epis
       .orderBy('e.number', dir === 'previous' ? 'desc' : 'asc')
       .limit(1)
       .executeTakeFirst();
-  const [chapters, systems, previous, next, opened, closed] = await Promise.all([
+  const [chapters, systems, previous, next, opened, closed, partSystems] = await Promise.all([
     db.selectFrom('chapters').selectAll().where('episode_id', '=', episodeId).orderBy('position').execute(),
     db
       .selectFrom('build_systems')
@@ -214,11 +214,21 @@ export async function getEpisodeReading(db: Db, episodeId: number): Promise<Epis
       .where(isPublishedEpisode)
       .orderBy('o.id')
       .execute(),
+    db
+      .selectFrom('part_lines')
+      .select('system_key')
+      .distinct()
+      .where('episode_id', '=', episodeId)
+      .where('system_key', 'is not', null)
+      .execute(),
   ]);
   const systemList = systems.map((s) => ({ key: s.key, name: s.name, safetyCritical: s.safety_critical }));
   const byKey = new Map(systemList.map((s) => [s.key, s]));
   const caution = needsCaution(
-    { raisedVehicle: e.raised_vehicle, systemKeys: chapters.flatMap((c) => (c.system_key ? [c.system_key] : [])) },
+    {
+      raisedVehicle: e.raised_vehicle,
+      systemKeys: [...chapters, ...partSystems].flatMap((c) => (c.system_key ? [c.system_key] : [])),
+    },
     systemList,
   );
   const now = Date.now();
@@ -245,6 +255,7 @@ export async function getEpisodeReading(db: Db, episodeId: number): Promise<Epis
       videoLink: e.video_url ? safeChapterLink(e.video_url, c.start_seconds, e.video_link_pattern) : null,
     })),
     caution: cautionText(caution.reasons),
+    systems: systemList,
     build: {
       id: e.build_id,
       slug: e.build_slug,

@@ -3,7 +3,7 @@ import { SEARCH_PAGE_SIZE, SNIPPET_MARK_END, SNIPPET_MARK_START, type SearchResp
 import type { Db } from '../db/kysely';
 
 interface HitRow {
-  kind: 'episode' | 'build';
+  kind: 'episode' | 'build' | 'part';
   id: number;
   title: string;
   build_slug: string;
@@ -43,6 +43,19 @@ export async function search(db: Db, q: string, page: number): Promise<SearchRes
          and e.status = 'published' and e.published_at <= now() and e.deleted_at is null
          and b.visibility = 'public' and b.deleted_at is null and u.deleted_at is null
       union all
+      select 'part', pl.id, pl.description, b.slug, b.title, u.handle, u.display_name,
+             e.number, e.slug, e.published_at,
+             ts_rank_cd(pl.search_vector, query.tsq) * 0.5,
+             concat_ws(' ', pl.description, pl.part_number)
+        from part_lines pl
+        join episodes e on e.id = pl.episode_id
+        join builds b on b.id = e.build_id
+        join users u on u.id = b.owner_id
+        cross join query
+       where pl.search_vector @@ query.tsq
+         and e.status = 'published' and e.published_at <= now() and e.deleted_at is null
+         and b.visibility = 'public' and b.deleted_at is null and u.deleted_at is null
+      union all
       select 'build', b.id, b.title, b.slug, b.title, u.handle, u.display_name,
              null, null, null,
              ts_rank_cd(b.search_vector, query.tsq),
@@ -77,7 +90,7 @@ export async function search(db: Db, q: string, page: number): Promise<SearchRes
       snippet: r.snippet,
       build: { slug: r.build_slug, title: r.build_title },
       creator: { handle: r.handle, displayName: r.display_name },
-      episode: r.kind === 'episode' ? { number: r.number!, slug: r.episode_slug! } : null,
+      episode: r.kind !== 'build' ? { number: r.number!, slug: r.episode_slug! } : null,
       publishedAt: r.published_at ? new Date(r.published_at).toISOString() : null,
     })),
   };

@@ -15,13 +15,11 @@ export async function listSuppliers(db: Db, q: string, buildId?: number) {
     .select(['s.id', 's.name', 's.website', used.as('used_in_build')])
     .where('s.merged_into_id', 'is', null)
     .where(sql<boolean>`s.name ilike ${pattern}`)
-    .orderBy(used, 'desc')
+    .orderBy(sql`used_in_build`, 'desc')
     .orderBy(sql`lower(s.name)`)
     .limit(20)
     .execute();
-  return rows
-    .map((r) => ({ id: r.id, name: r.name, website: r.website, usedInBuild: r.used_in_build }))
-    .sort((a, b) => Number(b.usedInBuild) - Number(a.usedInBuild));
+  return rows.map((r) => ({ id: r.id, name: r.name, website: r.website, usedInBuild: r.used_in_build }));
 }
 
 /** Creates a supplier, or returns the live one with the same name (case and spacing ignored). */

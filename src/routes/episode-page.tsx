@@ -7,6 +7,9 @@ import { clipDescription, PageMeta } from '../components/ui/page-meta';
 import { Plate } from '../components/ui/plate';
 import { StateMessage } from '../components/ui/state-message';
 import { formatHours } from '../features/builds/lib/hours';
+import { buildTotalsOptions, useBuildTotals } from '../features/parts/api/get-build-totals';
+import { episodePartsOptions, useEpisodeParts } from '../features/parts/api/get-episode-parts';
+import { PublicPartsTable } from '../features/parts/components/public-parts-table';
 import { episodeReadingOptions, useEpisodeReading } from '../features/reading/api/get-episode-reading';
 import { chapterAt, ChapterRail } from '../features/reading/components/chapter-rail';
 import { ChapterSections } from '../features/reading/components/chapter-sections';
@@ -22,7 +25,12 @@ import type { LoaderDeps } from './route-guards';
 export function episodePageLoader(deps: LoaderDeps) {
   return async ({ request, params }: { request: Request; params: Record<string, string | undefined> }) => {
     const { episodeId, buildId } = await resolveEpisodePage(deps, request, params);
-    await needData(deps.queryClient.ensureQueryData(episodeReadingOptions(deps.api, episodeId)));
+    await Promise.all([
+      needData(deps.queryClient.ensureQueryData(episodeReadingOptions(deps.api, episodeId))),
+      // Sections beyond the write-up show their own error states; their failure must not take the page down.
+      deps.queryClient.ensureQueryData(episodePartsOptions(deps.api, episodeId)).catch(() => undefined),
+      deps.queryClient.ensureQueryData(buildTotalsOptions(deps.api, buildId)).catch(() => undefined),
+    ]);
     return { episodeId, buildId };
   };
 }
@@ -161,7 +169,8 @@ function Episode({ episode }: { episode: EpisodeReading }) {
             <WriteUp html={episode.writeUpHtml} />
           </article>
           <ChapterSections chapters={episode.chapters} active={active} />
-          {/* Later issues add their sections here: the parts table, figures, and posts by chapter. */}
+          <EpisodeParts episode={episode} />
+          {/* Later issues add their sections here: figures, and posts by chapter. */}
           <EpisodeOpenItems episode={episode} />
           <EpisodeNeighbours episode={episode} />
         </div>
@@ -192,4 +201,12 @@ function EpisodeNeighbours({ episode }: { episode: EpisodeReading }) {
       ) : null}
     </nav>
   );
+}
+
+function EpisodeParts({ episode }: { episode: EpisodeReading }) {
+  const parts = useEpisodeParts(episode.id);
+  const totals = useBuildTotals(episode.build.id);
+  if (!parts.data) return parts.error ? <StateMessage kind="error" title="The parts list could not be loaded." /> : null;
+  if (!parts.data.items.length) return null;
+  return <PublicPartsTable parts={parts.data} chapters={episode.chapters} systems={episode.systems} buildTotals={totals.data} />;
 }

@@ -108,6 +108,7 @@ function Result({ hit }: { hit: SearchHit }) {
       <p className="font-condensed text-[13px] font-semibold tracking-[0.1em] text-slate uppercase">
         {hit.episode ? (
           <>
+            {hit.kind === 'part' ? 'Part used in ' : null}
             <span className="text-oxide">Ep. {hit.episode.number}</span> · {hit.build.title}
           </>
         ) : (

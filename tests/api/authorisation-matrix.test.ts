@@ -17,7 +17,7 @@ type ActorName = (typeof ACTORS)[number];
 type Row = Record<ActorName, number>;
 
 interface World {
-  ids: { buildA: number; editor: number; follower: number; invitation: number; draft: number; openItem: number };
+  ids: { buildA: number; editor: number; follower: number; invitation: number; draft: number; openItem: number; partLine: number };
   slugs: { owner: string; buildA: string; draft: string };
   clients: Record<ActorName, TestClient>;
 }
@@ -172,6 +172,32 @@ const matrix: Record<string, { request: (w: World) => { path: string; body?: unk
   'GET /episodes/:episodeId/reading': { request: (w) => ({ path: `/api/episodes/${w.ids.draft}/reading` }), expect: draftTeam(200) },
   'GET /creators/:handle': { request: (w) => ({ path: `/api/creators/${w.slugs.owner}` }), expect: all(200) },
   'GET /search': { request: () => ({ path: '/api/search?q=coolant' }), expect: all(200) },
+  // Parts: lines follow their episode (a draft's only for its team); the ledger is the build team's;
+  // totals are public (published lines only unless the team asks); anyone signed in may name a supplier.
+  'GET /episodes/:episodeId/part-lines': { request: (w) => ({ path: `/api/episodes/${w.ids.draft}/part-lines` }), expect: draftTeam(200) },
+  'POST /episodes/:episodeId/part-lines': {
+    request: (w) => ({ path: `/api/episodes/${w.ids.draft}/part-lines`, body: {} }),
+    expect: draftTeam(400),
+  },
+  'PATCH /part-lines/:partLineId': { request: (w) => ({ path: `/api/part-lines/${w.ids.partLine}`, body: {} }), expect: draftTeam(400) },
+  'DELETE /part-lines/:partLineId': {
+    request: (w) => ({ path: `/api/part-lines/${w.ids.partLine}` }),
+    expect: draftTeam(204),
+    freshWorldPerActor: true,
+  },
+  'GET /builds/:buildId/totals': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}/totals?scope=all` }), expect: all(200) },
+  'GET /builds/:buildId/ledger': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}/ledger` }), expect: teamOnly(200) },
+  'GET /builds/:buildId/ledger.csv': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}/ledger.csv` }), expect: teamOnly(200) },
+  'POST /builds/:buildId/ledger/import': {
+    request: (w) => ({ path: `/api/builds/${w.ids.buildA}/ledger/import`, body: { csv: '' } }),
+    expect: teamOnly(400),
+  },
+  'GET /suppliers': { request: () => ({ path: '/api/suppliers?q=a' }), expect: signedIn(200) },
+  'POST /suppliers': { request: () => ({ path: '/api/suppliers', body: { name: '' } }), expect: signedIn(400) },
+  'POST /admin/suppliers/:supplierId/merge': {
+    request: () => ({ path: '/api/admin/suppliers/1/merge', body: {} }),
+    expect: adminOnly(400),
+  },
 };
 
 let app: TestApp;
@@ -244,6 +270,22 @@ async function makeWorld(visibility: 'public' | 'unlisted' | 'private' = 'public
     clients[name] = new TestClient(app.baseUrl);
     if (name !== 'visitor') await signInByEmail(clients[name], db, users[name].email);
   }
+  const partLine = await db
+    .insertInto('part_lines')
+    .values({
+      build_id: buildA.id,
+      episode_id: draft.id,
+      position: 0,
+      kind: 'part',
+      description: 'Radiator cap',
+      source: 'new',
+      status: 'arrived',
+      quantity: '1',
+      unit_price_minor: 1200,
+      currency: 'EUR',
+    })
+    .returning('id')
+    .executeTakeFirstOrThrow();
   return {
     ids: {
       buildA: buildA.id,
@@ -252,6 +294,7 @@ async function makeWorld(visibility: 'public' | 'unlisted' | 'private' = 'public
       invitation: invitation.id,
       draft: draft.id,
       openItem: item.id,
+      partLine: partLine.id,
     },
     slugs: { owner: ownerRow.handle, buildA: buildA.slug, draft: draft.slug },
     clients,

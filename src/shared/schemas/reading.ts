@@ -101,6 +101,8 @@ export const episodeReading = z.object({
     }),
   ),
   caution: z.array(z.string()),
+  /** The build's vehicle systems, in its order. */
+  systems: z.array(z.object({ key: z.string(), name: z.string(), safetyCritical: z.boolean() })),
   build: z.object({
     id: z.number().int(),
     slug: z.string(),
@@ -142,7 +144,8 @@ export const SNIPPET_MARK_START = '\u0002';
 export const SNIPPET_MARK_END = '\u0003';
 
 export const searchHit = z.object({
-  kind: z.enum(['episode', 'build']),
+  /** A part hit is a line of an episode's parts list (its description or part number matched). */
+  kind: z.enum(['episode', 'build', 'part']),
   id: z.number().int(),
   title: z.string(),
   snippet: z.string(),
