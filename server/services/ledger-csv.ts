@@ -113,7 +113,8 @@ export async function parseLedgerCsv(db: Db, buildId: number, text: string): Pro
   const out: Parsed = { rows: [], lines: [] };
 
   parsed.data.forEach((raw, i) => {
-    const cell = (c: Column) => (raw[c] ?? '').trim();
+    // Undo the export's formula guard (a leading ' before = + - @), so export → import is exact.
+    const cell = (c: Column) => (raw[c] ?? '').trim().replace(/^'(?=[=+\-@\t\r])/, '');
     const errors: Record<string, string> = {};
     const episodeNumber = /^\d{1,6}$/.test(cell('episode')) ? Number(cell('episode')) : null;
     const episodeId = episodeNumber === null ? undefined : episodeByNumber.get(episodeNumber);

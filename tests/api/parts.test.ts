@@ -71,7 +71,7 @@ const add = async (episodeId: number, line: Record<string, unknown>, client = ow
 };
 
 describe('the hand-computed fixture', () => {
-  // Thirteen lines; every expected figure below was worked out by hand from DESIGN.md's money words
+  // Fourteen lines (one returned, named like a spreadsheet formula); every expected figure below was worked out by hand from DESIGN.md's money words
   // and the rounding rule in src/shared/money.ts (half away from zero, once per amount).
   beforeAll(async () => {
     const T = { taxRateBp: 2000, taxIncluded: true };
@@ -95,6 +95,7 @@ describe('the hand-computed fixture', () => {
     await add(ep2, { description: 'L10 wheels sold', kind: 'sale', source: 'used', quantity: '4', unitPriceMinor: 2000 }); // sales 8000
     // £32.00 incl. 20 %: own net 2667, tax 533; × 1.165 → net 3107.055→3107, tax 620.945→621, gross 3728.
     await add(ep2, { description: 'L11 pads', systemKey: 'brakes', currency: 'GBP', fxRate: '1.165', unitPriceMinor: 3200, ...T });
+    await add(ep1, { description: '=SUM(A1) -20 mm spacer', kind: 'part', status: 'returned', unitPriceMinor: 10 }); // a formula-looking name
     await add(ep2, { description: 'L12 flaring tool', kind: 'tool', unitPriceMinor: 4600, taxRateBp: 2000, taxIncluded: false }); // net 4600, tax 920
     // In dollars with no rate: left out of every figure and counted as unconverted. (Created, then its rate removed in SQL,
     // since the API insists on a rate; an old line after the build's currency changed looks like this.)
@@ -105,7 +106,7 @@ describe('the hand-computed fixture', () => {
   it('gives the episode totals', async () => {
     const one = await visitor.get(`/api/episodes/${ep1}/part-lines`);
     expect(one.status).toBe(200);
-    expect(one.body.items).toHaveLength(7);
+    expect(one.body.items).toHaveLength(8);
     // Spent in ep. 1: 1000 + 2880 + 1700 + 18500 = 24080; tax 167 + 480 + 283 + 3083 = 4013.
     expect(one.body.totals).toEqual({
       currency: 'EUR',
@@ -115,7 +116,7 @@ describe('the hand-computed fixture', () => {
       savedByReuseMinor: 0,
       salesMinor: 0,
       unconverted: 0,
-      lines: 7,
+      lines: 8,
     });
     const two = await visitor.get(`/api/episodes/${ep2}/part-lines`);
     // Spent in ep. 2: 0 + 0 + 3728 + 5520 = 9248; tax 621 + 920 = 1541.
@@ -308,6 +309,7 @@ describe('CSV', () => {
     expect(res.status).toBe(200);
     expect(res.headers.get('content-type')).toContain('text/csv');
     const csv = await res.text();
+    expect(csv).toContain("'=SUM(A1) -20 mm spacer");
     expect(csv.split('\r\n')[0]).toBe(
       'episode,kind,description,part_number,supplier,system,at,source,status,quantity,unit,unit_price,currency,tax_rate,tax_included,fx_rate,avoided_cost,buy_url,affiliate',
     );
