@@ -51,3 +51,9 @@ export async function openItemResource(deps: AppDeps, params: { openItemId: numb
   const o = await deps.db.selectFrom('open_items').select('opened_in_episode_id').where('id', '=', params.openItemId).executeTakeFirst();
   return o ? episodeResource(deps, { episodeId: o.opened_in_episode_id }) : null;
 }
+
+/** The episode a figure (`:figureId`) belongs to. */
+export async function figureResource(deps: AppDeps, params: { figureId: number }): Promise<Resource | null> {
+  const f = await deps.db.selectFrom('figures').select('episode_id').where('id', '=', params.figureId).executeTakeFirst();
+  return f ? episodeResource(deps, { episodeId: f.episode_id }) : null;
+}

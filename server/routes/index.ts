@@ -3,6 +3,7 @@ import { accountRoutes } from './account';
 import { adminRoutes } from './admin';
 import { buildRoutes } from './builds';
 import { episodeEditorRoutes } from './episode-editor';
+import { figureRoutes } from './figures';
 import { openItemRoutes } from './open-items';
 import { workbenchRoutes } from './workbench';
 import { episodeRoutes } from './episodes';
@@ -21,5 +22,6 @@ export const routeRegistry: readonly RouteSpec[] = [
   ...buildRoutes,
   ...episodeEditorRoutes,
   ...openItemRoutes,
+  ...figureRoutes,
   ...workbenchRoutes,
 ];
