@@ -13,6 +13,7 @@ import { primeSession, requireAccount } from '../routes/route-guards';
 import { SignInPage } from '../routes/sign-in';
 import { SignInLinkPage } from '../routes/sign-in-link';
 import { workbenchLoader, WorkbenchPage } from '../routes/workbench';
+import { WorkshopPage } from '../routes/workshop';
 import { workbenchBuildLoader, WorkbenchBuildPage } from '../routes/workbench-build';
 import { NewBuildPage } from '../routes/workbench-build-new';
 import { buildSettingsLoader, BuildSettingsPage } from '../routes/workbench-build-settings';
@@ -85,6 +86,7 @@ export function createRoutes({ queryClient, api }: RouteDeps): RouteObject[] {
           lazy: () => import('../routes/episode-editor'),
         },
         { path: 'admin/accounts', id: 'admin-accounts', loader: adminAccountsLoader(deps), Component: AdminAccountsPage },
+        { path: 'workshop', id: 'workshop', Component: WorkshopPage },
         { path: '*', id: NOT_FOUND_ROUTE_ID, Component: NotFound },
       ],
     },

@@ -18,7 +18,10 @@ export interface NavItem {
 }
 
 /** The header navigation; later screens add their entries here. */
-export const navItems: readonly NavItem[] = [{ label: 'Latest episodes', to: paths.home(), end: true }];
+export const navItems: readonly NavItem[] = [
+  { label: 'Latest episodes', to: paths.home(), end: true },
+  { label: 'Workshop', to: paths.workshop() },
+];
 
 export const PRODUCT_NAME = 'Rivet & Reel';
 

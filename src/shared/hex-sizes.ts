@@ -104,3 +104,17 @@ export function knownSpannerSizes(unit: SpannerUnit): number[] {
   for (const family of HEX_FAMILIES) if (unitOf(family) === unit) for (const af of Object.values(TABLE[family])) sizes.add(af);
   return [...sizes].sort((a, b) => a - b);
 }
+
+/** Reads a spanner size as typed: "13", "13.0", "9/16", "0.5625", "1 1/8" (whole and fraction). Null when unreadable. */
+export function parseSpannerSize(text: string): number | null {
+  const t = text.trim().replace(',', '.');
+  const mixed = /^(?:(\d+)\s+)?(\d+)\s*\/\s*(\d+)$/.exec(t);
+  if (mixed) {
+    const den = Number(mixed[3]);
+    if (den === 0) return null;
+    return Number(mixed[1] ?? 0) + Number(mixed[2]) / den;
+  }
+  if (!/^\d+(\.\d+)?$/.test(t)) return null;
+  const n = Number(t);
+  return n > 0 ? n : null;
+}

@@ -2,6 +2,7 @@
 export const paths = {
   home: () => '/',
   frontPage: (page: number) => (page <= 1 ? '/' : `/?page=${page}`),
+  workshop: () => '/workshop',
   creator: (handle: string) => `/creators/${encodeURIComponent(handle)}`,
   build: (handle: string, buildSlug: string) => `/builds/${encodeURIComponent(handle)}/${encodeURIComponent(buildSlug)}`,
   episode: (handle: string, buildSlug: string, episodeSlug: string) =>

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { hexSizesForThread, threadsForSpanner } from '../../src/shared/hex-sizes';
+import { hexSizesForThread, parseSpannerSize, threadsForSpanner } from '../../src/shared/hex-sizes';
 import { findThread, metricStressArea, THREADS, unifiedStressAreaIn2 } from '../../src/shared/threads';
 
 describe('ISO metric threads', () => {
@@ -158,4 +158,16 @@ describe('across flats', () => {
   it('a 15 mm spanner matches no standard bolt head in our tables', () => {
     expect(threadsForSpanner(15, 'mm')).toEqual([]);
   });
+});
+
+describe('reading a spanner size as typed (arithmetic)', () => {
+  it.each([
+    ['13', 13],
+    ['9/16', 0.5625],
+    ['1 1/8', 1.125],
+    ['0,5625', 0.5625],
+    ['abc', null],
+    ['1/0', null],
+    ['0', null],
+  ] as const)('%s → %s', (text, size) => expect(parseSpannerSize(text)).toBe(size));
 });

@@ -1,7 +1,7 @@
+import { GradeOptions, ThreadOptions, TorqueUnitOptions } from '../../../../components/ui/fastener-options';
 import { SelectField } from '../../../../components/ui/select-field';
 import { TextAreaField } from '../../../../components/ui/text-area-field';
 import { TextField } from '../../../../components/ui/text-field';
-import { GRADE_FAMILIES, GRADE_FAMILY_LABELS, GRADES } from '../../../../shared/fasteners';
 import type { BuildSystem } from '../../../../shared/schemas/builds';
 import {
   TIGHTENING_METHOD_LABELS,
@@ -11,8 +11,7 @@ import {
   type TighteningMethod,
   type ValueSource,
 } from '../../../../shared/schemas/figures';
-import { THREAD_FAMILIES, THREAD_FAMILY_LABELS, THREADS } from '../../../../shared/threads';
-import { TORQUE_UNIT_LABELS, TORQUE_UNITS, type TorqueUnit } from '../../../../shared/torque';
+import type { TorqueUnit } from '../../../../shared/torque';
 import type { DraftErrors, FigureDraft } from '../../model/figure-draft';
 
 interface FigureFieldsProps {
@@ -20,31 +19,6 @@ interface FigureFieldsProps {
   errors: DraftErrors;
   systems: readonly BuildSystem[];
   onChange: (change: Partial<FigureDraft>) => void;
-}
-
-function GradeOptions() {
-  return (
-    <>
-      <option value="">Not recorded</option>
-      {GRADE_FAMILIES.map((family) => (
-        <optgroup key={family} label={GRADE_FAMILY_LABELS[family]}>
-          {GRADES.filter((g) => g.family === family).map((g) => (
-            <option key={g.code} value={g.code}>
-              {g.label}
-            </option>
-          ))}
-        </optgroup>
-      ))}
-    </>
-  );
-}
-
-function UnitOptions() {
-  return TORQUE_UNITS.map((u) => (
-    <option key={u} value={u}>
-      {TORQUE_UNIT_LABELS[u]}
-    </option>
-  ));
 }
 
 /** The inputs of one figure; the method decides whether a value and angles are asked for. */
@@ -61,15 +35,7 @@ export function FigureFields({ draft, errors, systems, onChange }: FigureFieldsP
         className="md:col-span-2"
       />
       <SelectField label="Thread" value={draft.thread} error={errors.thread} onChange={(e) => onChange({ thread: e.target.value })}>
-        {THREAD_FAMILIES.map((family) => (
-          <optgroup key={family} label={THREAD_FAMILY_LABELS[family]}>
-            {THREADS.filter((t) => t.family === family).map((t) => (
-              <option key={t.code} value={t.code}>
-                {t.label}
-              </option>
-            ))}
-          </optgroup>
-        ))}
+        <ThreadOptions />
       </SelectField>
       <SelectField
         label="Vehicle system"
@@ -91,7 +57,7 @@ export function FigureFields({ draft, errors, systems, onChange }: FigureFieldsP
         error={errors.gradeFitted}
         onChange={(e) => onChange({ gradeFitted: e.target.value })}
       >
-        <GradeOptions />
+        <GradeOptions empty="Not recorded" />
       </SelectField>
       <SelectField
         label="Grade specified"
@@ -100,7 +66,7 @@ export function FigureFields({ draft, errors, systems, onChange }: FigureFieldsP
         error={errors.gradeSpecified}
         onChange={(e) => onChange({ gradeSpecified: e.target.value })}
       >
-        <GradeOptions />
+        <GradeOptions empty="Not recorded" />
       </SelectField>
       <SelectField
         label="Tightening method"
@@ -135,7 +101,7 @@ export function FigureFields({ draft, errors, systems, onChange }: FigureFieldsP
           onChange={(e) => onChange({ value: e.target.value })}
         />
         <SelectField label="Unit" value={draft.unit} error={errors.unit} onChange={(e) => onChange({ unit: e.target.value as TorqueUnit })}>
-          <UnitOptions />
+          <TorqueUnitOptions />
         </SelectField>
       </div>
       {draft.method === 'torque-angle' ? (
@@ -173,7 +139,7 @@ export function FigureFields({ draft, errors, systems, onChange }: FigureFieldsP
             error={errors.wrenchUnit}
             onChange={(e) => onChange({ wrenchUnit: e.target.value as TorqueUnit })}
           >
-            <UnitOptions />
+            <TorqueUnitOptions />
           </SelectField>
         </div>
       </fieldset>
