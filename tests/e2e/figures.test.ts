@@ -86,10 +86,8 @@ describe('figures', () => {
     expect(rows).toEqual([{ grade_fitted: 'A2-70', value: '18', unit: 'N-m', wrench_unit: 'lbf-ft' }]);
     // A cooling-system figure makes the episode show its caution.
     await page
-      .getByRole('region', { name: /Safety caution/i })
-      .or(page.locator('#caution-preview-heading').locator('..'))
-      .getByText('Safety-critical')
-      .first()
+      .getByRole('region', { name: 'Safety caution' })
+      .getByText(/This episode touches the cooling system/)
       .waitFor();
     await page.screenshot({ path: '.data/screenshots/editor-figures-desktop.png', fullPage: true });
     expect(creator.consoleErrors).toEqual([]);
