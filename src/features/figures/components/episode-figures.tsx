@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { useEffect, useId, useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { StateMessage } from '../../../components/ui/state-message';
 import { isTorqueUnit, type TorqueUnit } from '../../../shared/torque';
@@ -37,11 +37,13 @@ function useReaderUnit(): [TorqueUnit | null, (u: TorqueUnit) => void] {
 export function EpisodeFigures({ episodeId }: { episodeId: number }) {
   const { data, error, isFetching, refetch } = useEpisodeFigures(episodeId);
   const [unit, setUnit] = useReaderUnit();
+  // The episode page composes several sections: an id of its own avoids clashing with theirs.
+  const headingId = useId();
 
   if (!data) {
     return (
-      <section aria-labelledby="figures-heading">
-        <h2 id="figures-heading" className="label-condensed border-b-2 border-ink pb-2">
+      <section aria-labelledby={headingId}>
+        <h2 id={headingId} className="label-condensed border-b-2 border-ink pb-2">
           Figures
         </h2>
         <div className="mt-3">
@@ -67,8 +69,8 @@ export function EpisodeFigures({ episodeId }: { episodeId: number }) {
   if (data.items.length === 0) return null;
 
   return (
-    <section aria-labelledby="figures-heading">
-      <h2 id="figures-heading" className="label-condensed border-b-2 border-ink pb-2">
+    <section aria-labelledby={headingId}>
+      <h2 id={headingId} className="label-condensed border-b-2 border-ink pb-2">
         Figures
       </h2>
       <p className="mt-2 text-[15px] text-slate">
