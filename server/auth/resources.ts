@@ -57,3 +57,9 @@ export async function partLineResource(deps: AppDeps, params: { partLineId: numb
   const l = await deps.db.selectFrom('part_lines').select('episode_id').where('id', '=', params.partLineId).executeTakeFirst();
   return l ? episodeResource(deps, { episodeId: l.episode_id }) : null;
 }
+
+/** The episode a figure (`:figureId`) belongs to. */
+export async function figureResource(deps: AppDeps, params: { figureId: number }): Promise<Resource | null> {
+  const f = await deps.db.selectFrom('figures').select('episode_id').where('id', '=', params.figureId).executeTakeFirst();
+  return f ? episodeResource(deps, { episodeId: f.episode_id }) : null;
+}

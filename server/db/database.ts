@@ -166,6 +166,33 @@ export interface OpenItemsTable {
   updated_at: Generated<Date>;
 }
 
+export type FigureMethod = 'torque' | 'torque-angle' | 'snug';
+export type FigureUnit = 'N-m' | 'lbf-ft' | 'lbf-in' | 'kgf-m';
+export type FigureSource = 'workshop-manual' | 'common-practice' | 'measured' | 'estimate';
+
+/** A workshop figure in an episode; `value` and the wrench range are `numeric` (strings from pg). */
+export interface FiguresTable {
+  id: Generated<number>;
+  episode_id: number;
+  position: number;
+  fastener: string;
+  thread: string;
+  grade_fitted: string | null;
+  grade_specified: string | null;
+  method: FigureMethod;
+  value: ColumnType<string | null, number | null, number | null>;
+  unit: FigureUnit;
+  angle_stages: ColumnType<number[], string | undefined, string>;
+  source: FigureSource;
+  wrench_min: ColumnType<string | null, number | null, number | null>;
+  wrench_max: ColumnType<string | null, number | null, number | null>;
+  wrench_unit: FigureUnit | null;
+  system_key: string | null;
+  note: string | null;
+  created_at: Generated<Date>;
+  updated_at: Generated<Date>;
+}
+
 export interface EpisodesTable {
   id: Generated<number>;
   build_id: number;
@@ -301,4 +328,5 @@ export interface Database {
   currencies: CurrenciesTable;
   suppliers: SuppliersTable;
   part_lines: PartLinesTable;
+  figures: FiguresTable;
 }

@@ -3,6 +3,7 @@ import { accountRoutes } from './account';
 import { adminRoutes } from './admin';
 import { buildRoutes } from './builds';
 import { episodeEditorRoutes } from './episode-editor';
+import { figureRoutes } from './figures';
 import { openItemRoutes } from './open-items';
 import { partLineRoutes } from './part-lines';
 import { readingRoutes } from './reading';
@@ -23,6 +24,7 @@ export const routeRegistry: readonly RouteSpec[] = [
   ...buildRoutes,
   ...episodeEditorRoutes,
   ...openItemRoutes,
+  ...figureRoutes,
   ...workbenchRoutes,
   ...readingRoutes,
   ...partLineRoutes,

@@ -6,6 +6,7 @@ import { EMPTY_WRITE_UP, type WriteUpDoc } from '../../src/shared/write-up';
 import type { Database } from '../db/database';
 import type { Db } from '../db/kysely';
 import { HttpError } from '../http/http-error';
+import { figureSystemKeys } from './figures';
 import { renderWriteUp } from './write-up-html';
 
 type Trx = Kysely<Database>;
@@ -68,7 +69,7 @@ export async function createEpisode(db: Db, buildId: number, input: EpisodeCreat
 export async function getEpisode(db: Db | Trx, episodeId: number): Promise<Episode | null> {
   const e = await db.selectFrom('episodes').selectAll().where('id', '=', episodeId).executeTakeFirst();
   if (!e) return null;
-  const [chapters, systems, partSystems] = await Promise.all([
+  const [chapters, systems, partSystems, figureKeys] = await Promise.all([
     db.selectFrom('chapters').selectAll().where('episode_id', '=', episodeId).orderBy('position').execute(),
     db.selectFrom('build_systems').select(['key', 'name', 'safety_critical']).where('build_id', '=', e.build_id).execute(),
     db
@@ -78,13 +79,12 @@ export async function getEpisode(db: Db | Trx, episodeId: number): Promise<Episo
       .where('episode_id', '=', episodeId)
       .where('system_key', 'is not', null)
       .execute(),
+    figureSystemKeys(db, episodeId),
   ]);
+  // The union of the systems the episode's chapters, part lines and figures name (DESIGN.md "Safety").
+  const systemKeys = [...[...chapters, ...partSystems].flatMap((c) => (c.system_key ? [c.system_key] : [])), ...figureKeys];
   const caution = needsCaution(
-    {
-      raisedVehicle: e.raised_vehicle,
-      // Chapters and part lines both name systems (DESIGN.md "Safety").
-      systemKeys: [...chapters, ...partSystems].flatMap((c) => (c.system_key ? [c.system_key] : [])),
-    },
+    { raisedVehicle: e.raised_vehicle, systemKeys },
     systems.map((s) => ({ key: s.key, name: s.name, safetyCritical: s.safety_critical })),
   );
   return {

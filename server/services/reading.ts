@@ -5,6 +5,7 @@ import type { BuildCard, BuildOverview, CreatorPage, EpisodeReading } from '../.
 import type { BuildCardRow } from '../db/reading.queries';
 import { isPublishedEpisode, listCreatorBuilds } from '../db/reading.queries';
 import { listLatestEpisodes } from '../db/episodes.queries';
+import { figureSystemKeys } from './figures';
 import type { Db } from '../db/kysely';
 import { presentEpisodeListItem } from '../presenters/episodes';
 
@@ -182,7 +183,7 @@ export async function getEpisodeReading(db: Db, episodeId: number): Promise<Epis
       .orderBy('e.number', dir === 'previous' ? 'desc' : 'asc')
       .limit(1)
       .executeTakeFirst();
-  const [chapters, systems, previous, next, opened, closed, partSystems] = await Promise.all([
+  const [chapters, systems, previous, next, opened, closed, partSystems, figureKeys] = await Promise.all([
     db.selectFrom('chapters').selectAll().where('episode_id', '=', episodeId).orderBy('position').execute(),
     db
       .selectFrom('build_systems')
@@ -221,13 +222,14 @@ export async function getEpisodeReading(db: Db, episodeId: number): Promise<Epis
       .where('episode_id', '=', episodeId)
       .where('system_key', 'is not', null)
       .execute(),
+    figureSystemKeys(db, episodeId),
   ]);
   const systemList = systems.map((s) => ({ key: s.key, name: s.name, safetyCritical: s.safety_critical }));
   const byKey = new Map(systemList.map((s) => [s.key, s]));
   const caution = needsCaution(
     {
       raisedVehicle: e.raised_vehicle,
-      systemKeys: [...chapters, ...partSystems].flatMap((c) => (c.system_key ? [c.system_key] : [])),
+      systemKeys: [...[...chapters, ...partSystems].flatMap((c) => (c.system_key ? [c.system_key] : [])), ...figureKeys],
     },
     systemList,
   );

@@ -18,6 +18,7 @@ import { searchPageLoader, SearchPage } from '../routes/search-page';
 import { SignInPage } from '../routes/sign-in';
 import { SignInLinkPage } from '../routes/sign-in-link';
 import { workbenchLoader, WorkbenchPage } from '../routes/workbench';
+import { WorkshopPage } from '../routes/workshop';
 import { workbenchBuildLoader, WorkbenchBuildPage } from '../routes/workbench-build';
 import { NewBuildPage } from '../routes/workbench-build-new';
 import { buildSettingsLoader, BuildSettingsPage } from '../routes/workbench-build-settings';
@@ -100,6 +101,7 @@ export function createRoutes({ queryClient, api }: RouteDeps): RouteObject[] {
           lazy: () => import('../routes/episode-editor'),
         },
         { path: 'admin/accounts', id: 'admin-accounts', loader: adminAccountsLoader(deps), Component: AdminAccountsPage },
+        { path: 'workshop', id: 'workshop', Component: WorkshopPage },
         { path: '*', id: NOT_FOUND_ROUTE_ID, Component: NotFound },
       ],
     },

@@ -21,6 +21,7 @@ export interface NavItem {
 export const navItems: readonly NavItem[] = [
   { label: 'Latest', to: paths.home(), end: true },
   { label: 'Builds', to: paths.builds() },
+  { label: 'Workshop', to: paths.workshop() },
 ];
 
 export const PRODUCT_NAME = 'Rivet & Reel';

@@ -7,6 +7,8 @@ import { clipDescription, PageMeta } from '../components/ui/page-meta';
 import { Plate } from '../components/ui/plate';
 import { StateMessage } from '../components/ui/state-message';
 import { formatHours } from '../features/builds/lib/hours';
+import { episodeFiguresOptions } from '../features/figures/api/get-episode-figures';
+import { EpisodeFigures } from '../features/figures/components/episode-figures';
 import { buildTotalsOptions, useBuildTotals } from '../features/parts/api/get-build-totals';
 import { episodePartsOptions, useEpisodeParts } from '../features/parts/api/get-episode-parts';
 import { PublicPartsTable } from '../features/parts/components/public-parts-table';
@@ -30,6 +32,7 @@ export function episodePageLoader(deps: LoaderDeps) {
       // Sections beyond the write-up show their own error states; their failure must not take the page down.
       deps.queryClient.ensureQueryData(episodePartsOptions(deps.api, episodeId)).catch(() => undefined),
       deps.queryClient.ensureQueryData(buildTotalsOptions(deps.api, buildId)).catch(() => undefined),
+      deps.queryClient.ensureQueryData(episodeFiguresOptions(deps.api, episodeId)).catch(() => undefined),
     ]);
     return { episodeId, buildId };
   };
@@ -146,7 +149,11 @@ function Episode({ episode }: { episode: EpisodeReading }) {
         {episode.summary ? <p className="mt-3 max-w-measure font-serif text-[17px] leading-relaxed text-ink-2">{episode.summary}</p> : null}
         {episode.caution.length ? (
           <div className="mt-4">
-            <CautionBar texts={episode.caution} />
+            <CautionBar label="Safety-critical">
+              {episode.caution.map((t) => (
+                <p key={t}>{t}</p>
+              ))}
+            </CautionBar>
           </div>
         ) : null}
         {episode.videoUrl ? (
@@ -170,7 +177,10 @@ function Episode({ episode }: { episode: EpisodeReading }) {
           </article>
           <ChapterSections chapters={episode.chapters} active={active} />
           <EpisodeParts episode={episode} />
-          {/* Later issues add their sections here: figures, and posts by chapter. */}
+          <div className="mt-10">
+            <EpisodeFigures episodeId={episode.id} />
+          </div>
+          {/* The followers issue adds posts by chapter here. */}
           <EpisodeOpenItems episode={episode} />
           <EpisodeNeighbours episode={episode} />
         </div>

@@ -51,6 +51,7 @@ describe('Build settings', () => {
     expect(calls.some((c) => c.method === 'DELETE' && c.url === '/api/builds/7')).toBe(true);
     const deleted = await screen.findByRole('region', { name: 'Recently deleted' });
     expect(within(deleted).getByRole('button', { name: 'Undo deleting the build Kestrel hatchback, rust and all' })).toBeTruthy();
+    // The notice arrives in navigation state and is read in an effect, a render after the list: wait for it.
     expect(await screen.findByText(/is deleted. Undo it under “Recently deleted”/)).toBeTruthy();
   });
 

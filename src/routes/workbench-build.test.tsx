@@ -55,7 +55,8 @@ describe('Build team page of a build', () => {
     const form = screen.getByRole('region', { name: 'New episode' });
     fireEvent.change(within(form).getByLabelText('Title'), { target: { value: 'Welding in the new floor' } });
     fireEvent.click(within(form).getByRole('button', { name: 'Start the episode' }));
-    await waitFor(() => expect(router.state.location.pathname).toBe('/workbench/episodes/44/edit'));
+    // The editor is a lazy route: its first import (Tiptap, the panels) can take over a second on a busy machine.
+    await waitFor(() => expect(router.state.location.pathname).toBe('/workbench/episodes/44/edit'), { timeout: 5000 });
     expect(calls.find((c) => c.method === 'POST')?.body).toEqual({ title: 'Welding in the new floor' });
   });
 

@@ -2,6 +2,7 @@
 export const paths = {
   home: () => '/',
   frontPage: (page: number) => (page <= 1 ? '/' : `/?page=${page}`),
+  workshop: () => '/workshop',
   creator: (handle: string) => `/creators/${encodeURIComponent(handle)}`,
   builds: (q: { kind?: string; make?: string; decade?: number; page?: number } = {}) => {
     const p = new URLSearchParams();

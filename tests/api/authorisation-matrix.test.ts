@@ -17,7 +17,16 @@ type ActorName = (typeof ACTORS)[number];
 type Row = Record<ActorName, number>;
 
 interface World {
-  ids: { buildA: number; editor: number; follower: number; invitation: number; draft: number; openItem: number; partLine: number };
+  ids: {
+    buildA: number;
+    editor: number;
+    follower: number;
+    invitation: number;
+    draft: number;
+    openItem: number;
+    partLine: number;
+    figure: number;
+  };
   slugs: { owner: string; buildA: string; draft: string };
   clients: Record<ActorName, TestClient>;
 }
@@ -157,6 +166,18 @@ const matrix: Record<string, { request: (w: World) => { path: string; body?: unk
     expect: draftTeam(204),
     freshWorldPerActor: true,
   },
+  // Figures: readable wherever their episode is (a draft's only by its team); the build team writes them.
+  'GET /episodes/:episodeId/figures': { request: (w) => ({ path: `/api/episodes/${w.ids.draft}/figures` }), expect: draftTeam(200) },
+  'POST /episodes/:episodeId/figures': {
+    request: (w) => ({ path: `/api/episodes/${w.ids.draft}/figures`, body: { thread: 'M9' } }),
+    expect: draftTeam(400),
+  },
+  'PUT /figures/:figureId': { request: (w) => ({ path: `/api/figures/${w.ids.figure}`, body: {} }), expect: draftTeam(400) },
+  'DELETE /figures/:figureId': {
+    request: (w) => ({ path: `/api/figures/${w.ids.figure}` }),
+    expect: draftTeam(204),
+    freshWorldPerActor: true,
+  },
   'GET /workbench': { request: () => ({ path: '/api/workbench' }), expect: signedIn(200) },
   'GET /creators/:handle/builds/:buildSlug': {
     request: (w) => ({ path: `/api/creators/${w.slugs.owner}/builds/${w.slugs.buildA}` }),
@@ -263,6 +284,20 @@ async function makeWorld(visibility: 'public' | 'unlisted' | 'private' = 'public
     .values({ build_id: buildA.id, title: 'Refill coolant', opened_in_episode_id: draft.id })
     .returning('id')
     .executeTakeFirstOrThrow();
+  const figure = await db
+    .insertInto('figures')
+    .values({
+      episode_id: draft.id,
+      position: 0,
+      fastener: 'Housing bolts',
+      thread: 'M8',
+      method: 'torque',
+      value: 25,
+      unit: 'N-m',
+      source: 'measured',
+    })
+    .returning('id')
+    .executeTakeFirstOrThrow();
   const ownerRow = await db.selectFrom('users').select('handle').where('id', '=', users.owner.id).executeTakeFirstOrThrow();
 
   const clients = {} as Record<ActorName, TestClient>;
@@ -295,6 +330,7 @@ async function makeWorld(visibility: 'public' | 'unlisted' | 'private' = 'public
       draft: draft.id,
       openItem: item.id,
       partLine: partLine.id,
+      figure: figure.id,
     },
     slugs: { owner: ownerRow.handle, buildA: buildA.slug, draft: draft.slug },
     clients,

@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createDb, type DbHandle } from '../../server/db/kysely';
 import { migrateDown, migrateToLatest } from '../../server/db/migrator';
 import { runSeed } from '../../server/seed';
+import { listFigures } from '../../server/services/figures';
 import { loadDemoAccounts } from '../../server/seed/sections/demo-accounts';
 import { createTestDatabase, type TestDatabase } from '../helpers/test-db';
 
@@ -63,6 +64,11 @@ describe('demo seed', () => {
       .select(['id', 'episode_id', 'position', 'start_seconds', 'title'])
       .orderBy('id')
       .execute(),
+    figures: await handle.db
+      .selectFrom('figures')
+      .select(['id', 'episode_id', 'position', 'fastener', 'value', 'unit'])
+      .orderBy('id')
+      .execute(),
     openItems: await handle.db
       .selectFrom('open_items')
       .select(['id', 'title', 'opened_in_episode_id', 'closed_in_episode_id'])
@@ -89,6 +95,16 @@ describe('demo seed', () => {
     await runSeed(handle.db);
     expect(await snapshot()).toEqual(first);
     const runs = await handle.db.selectFrom('seed_runs').select(['section']).orderBy('section').execute();
-    expect(runs.map((r) => r.section)).toEqual(['demo-accounts', 'demo-builds']);
+    expect(runs.map((r) => r.section)).toEqual(['demo-accounts', 'demo-builds', 'demo-figures']);
+
+    // The figures issue's demo: mixed units, one by hand below the wrench's range, one weaker substitute, one torque plus angle.
+    const figures = (
+      await Promise.all([...new Set(first.figures.map((f) => f.episode_id))].map((id) => listFigures(handle.db, id)))
+    ).flat();
+    expect(new Set(figures.map((f) => f.unit)).size).toBeGreaterThanOrEqual(3);
+    const kinds = figures.flatMap((f) => f.checks.map((c) => c.kind));
+    expect(kinds).toContain('weaker-substitute');
+    expect(kinds).toContain('below-wrench-range');
+    expect(figures.some((f) => f.method === 'torque-angle' && f.angleStages.length > 0)).toBe(true);
   });
 });

@@ -1,21 +1,15 @@
+import type { ReactNode } from 'react';
+
 /**
- * The caution bar of LOOK.md: caution-soft fill, a 4 px caution rule, a condensed label and plain
- * sentences that defer to the workshop manual and local rules.
+ * LOOK.md's caution bar: caution-soft fill, a 4 px caution rule on the left, a condensed label
+ * ("Safety-critical", "Weaker than specified", "Below wrench range") and plain sentences that defer to
+ * the workshop manual and local rules. A note landmark named by its label, so it can be found by ear.
  */
-export function CautionBar({ label = 'Safety-critical', texts }: { label?: string; texts: readonly string[] }) {
-  if (!texts.length) return null;
+export function CautionBar({ label, children, className = '' }: { label: string; children: ReactNode; className?: string }) {
   return (
-    <div
-      role="note"
-      aria-label={label}
-      className="flex flex-col gap-x-3 gap-y-1 border-l-4 border-caution bg-caution-soft px-4 py-2.5 text-[15px] text-ink sm:flex-row sm:items-baseline"
-    >
-      <p className="shrink-0 font-condensed text-[13px] font-semibold tracking-label whitespace-nowrap text-caution uppercase">{label}</p>
-      <div className="space-y-1">
-        {texts.map((t) => (
-          <p key={t}>{t}</p>
-        ))}
-      </div>
+    <div role="note" aria-label={label} className={`border-l-4 border-caution bg-caution-soft px-4 py-3 ${className}`}>
+      <p className="font-condensed text-sm font-semibold tracking-label text-caution uppercase">{label}</p>
+      <div className="mt-1 space-y-1 text-[15px] text-ink">{children}</div>
     </div>
   );
 }

@@ -8,4 +8,5 @@ export const editorKeys = {
   episode: (episodeId: number) => [...editorKeys.all, 'episode', episodeId] as const,
   build: (buildId: number) => [...editorKeys.all, 'build', buildId] as const,
   openItems: (buildId: number, episodeId: number) => [...editorKeys.all, 'open-items', buildId, episodeId] as const,
+  figures: (episodeId: number) => [...editorKeys.all, 'figures', episodeId] as const,
 };

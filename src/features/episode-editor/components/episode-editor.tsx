@@ -3,6 +3,7 @@ import { Link } from 'react-router';
 import { paths } from '../../../shared/paths';
 import { DEFAULT_VIDEO_LINK_PATTERN, type Build } from '../../../shared/schemas/builds';
 import type { Episode } from '../../../shared/schemas/episodes';
+import { useFigures } from '../api/get-figures';
 import { useAutosave } from '../hooks/use-autosave';
 import { useLeaveWarning } from '../hooks/use-leave-warning';
 import { DRAFT_FIELDS, type DraftField, type EditorDraft } from '../model/draft';
@@ -11,6 +12,7 @@ import { CautionPreview } from './caution-preview';
 import { ChaptersPanel } from './chapters/chapters-panel';
 import { ConflictNotice } from './conflict-notice';
 import { EpisodeFields } from './episode-fields';
+import { FiguresPanel } from './figures/figures-panel';
 import { LeaveDialog } from './leave-dialog';
 import { OpenItemsPanel } from './open-items/open-items-panel';
 import { PublishControls } from './publish/publish-controls';
@@ -36,7 +38,7 @@ function fieldErrors(draft: EditorDraft, rejected: Partial<Record<DraftField, st
   return { ...out, ...rejected };
 }
 
-/** The episode editor: fields, write-up, chapters, open items, publishing, with autosave throughout. */
+/** The episode editor: fields, write-up, chapters, figures, open items, publishing, with autosave throughout. */
 export function EpisodeEditor({ episode, build }: EpisodeEditorProps) {
   const autosave = useAutosave(episode);
   const { draft, change, snapshot, observe } = autosave;
@@ -51,6 +53,8 @@ export function EpisodeEditor({ episode, build }: EpisodeEditorProps) {
   const duration = convertField('duration', draft);
   const durationSeconds = duration.ok && typeof duration.value === 'number' ? duration.value : null;
   const server = snapshot.server;
+  const figures = useFigures(server.id).data?.items;
+  const figureSystemKeys = useMemo(() => (figures ?? []).flatMap((f) => (f.system ? [f.system.key] : [])), [figures]);
   const heading = draft.title.trim() || 'Untitled episode';
 
   return (
@@ -108,12 +112,14 @@ export function EpisodeEditor({ episode, build }: EpisodeEditorProps) {
             linkPattern={build?.videoLinkPattern ?? DEFAULT_VIDEO_LINK_PATTERN}
             serverMessages={snapshot.rejectedRows}
           />
+          <FiguresPanel episodeId={server.id} systems={build?.systems ?? []} />
         </div>
         <aside aria-label="Publishing, safety and open items" className="min-w-0 space-y-10">
           <PublishControls episode={server} commit={autosave.commit} />
           <CautionPreview
             raisedVehicle={draft.raisedVehicle}
             rows={draft.chapters}
+            figureSystemKeys={figureSystemKeys}
             systems={build?.systems}
             serverNeedsCaution={server.needsCaution}
           />

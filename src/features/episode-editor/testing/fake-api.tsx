@@ -58,6 +58,7 @@ export function createFakeServer(initial: Episode) {
     state.calls.push(call);
     if (call.url === '/api/csrf-token') return json(200, { token: 'csrf-token-value' });
     if (call.url === `/api/episodes/${initial.id}` && call.method === 'GET') return json(200, state.episode);
+    if (call.url === `/api/episodes/${initial.id}/figures` && call.method === 'GET') return json(200, { items: [] });
     if (call.url === `/api/episodes/${initial.id}` && call.method === 'PATCH') {
       if (state.mode === 'network-error') throw new TypeError('Failed to fetch');
       if (state.mode === 'server-error') return json(503, { error: { code: 'unavailable', message: 'Try again' } });
