@@ -58,20 +58,24 @@ export function PublicPartsTable({
   const currency = parts.totals.currency;
   const money = (m: number, c = currency) => formatMinor(m, c);
   const systemByKey = new Map(systems.map((s) => [s.key, s]));
-  const groups = new Map<string, { label: string; lines: PartLine[] }>();
+  const groups = new Map<string, { label: string; order: number; lines: PartLine[] }>();
   for (const line of parts.items) {
     let key: string;
     let label: string;
+    // Groups follow the video (chapters) or the build's own order (systems); the rest come last.
+    let order = Number.MAX_SAFE_INTEGER;
     if (grouping === 'chapter') {
       const c = chapterOf(chapters, line.atSeconds);
       key = c ? `c${c.startSeconds}` : 'none';
       label = c ? `${formatTime(c.startSeconds)} · ${c.title}` : 'Not tied to a chapter';
+      if (c) order = c.startSeconds;
     } else {
       const s = line.systemKey ? systemByKey.get(line.systemKey) : undefined;
       key = s ? `s${s.key}` : 'none';
       label = s ? s.name : 'No system';
+      if (s) order = systems.indexOf(s);
     }
-    if (!groups.has(key)) groups.set(key, { label, lines: [] });
+    if (!groups.has(key)) groups.set(key, { label, order, lines: [] });
     groups.get(key)!.lines.push(line);
   }
   // The system this episode spent most on, for the "system to date" figure.
@@ -125,28 +129,30 @@ export function PublicPartsTable({
             </th>
           </tr>
         </thead>
-        {[...groups.values()].map((g) => (
-          <tbody key={g.label} className="max-sm:block">
-            <tr className="max-sm:block">
-              <th
-                colSpan={6}
-                scope="colgroup"
-                className="pt-4 pb-1 text-left font-condensed text-sm font-semibold tracking-[0.08em] text-oxide-2 uppercase max-sm:block"
-              >
-                {g.label}
-              </th>
-            </tr>
-            {g.lines.map((l) => (
-              <Row
-                key={l.id}
-                line={l}
-                system={l.systemKey ? systemByKey.get(l.systemKey) : undefined}
-                money={money}
-                buildCurrency={currency}
-              />
-            ))}
-          </tbody>
-        ))}
+        {[...groups.values()]
+          .sort((a, b) => a.order - b.order)
+          .map((g) => (
+            <tbody key={g.label} className="max-sm:block">
+              <tr className="max-sm:block">
+                <th
+                  colSpan={6}
+                  scope="colgroup"
+                  className="pt-4 pb-1 text-left font-condensed text-sm font-semibold tracking-[0.08em] text-oxide-2 uppercase max-sm:block"
+                >
+                  {g.label}
+                </th>
+              </tr>
+              {g.lines.map((l) => (
+                <Row
+                  key={l.id}
+                  line={l}
+                  system={l.systemKey ? systemByKey.get(l.systemKey) : undefined}
+                  money={money}
+                  buildCurrency={currency}
+                />
+              ))}
+            </tbody>
+          ))}
         <tfoot className="max-sm:block">
           <tr className="border-t-2 border-ink font-semibold max-sm:flex max-sm:justify-between">
             <td colSpan={5} className="py-2 pr-2">
