@@ -112,7 +112,11 @@ export const partLineRoutes = [
         .select(['currency', 'budget_minor'])
         .where('id', '=', params.buildId)
         .executeTakeFirstOrThrow();
-      const [totals, breakdowns] = await Promise.all([partTotals(deps.db, scope, b.currency), buildBreakdowns(deps.db, scope)]);
+      const [totals, breakdowns, onOrder] = await Promise.all([
+        partTotals(deps.db, scope, b.currency),
+        buildBreakdowns(deps.db, scope),
+        listLines(deps.db, scope, { status: 'on-order', limit: 20 }),
+      ]);
       return {
         totals,
         budgetMinor: b.budget_minor,
@@ -138,6 +142,13 @@ export const partLineRoutes = [
           title: e.title,
           spentMinor: e.spent,
           cumulativeMinor: e.cumulative,
+        })),
+        onOrder: onOrder.rows.map((l) => ({
+          id: l.id,
+          description: l.description,
+          grossMinor: l.b_gross,
+          episode: { number: l.episode_number, slug: l.episode_slug },
+          openItemTitle: l.open_item_title,
         })),
         includesUnpublished: includeUnpublished,
       };

@@ -53,7 +53,7 @@ export async function getWorkbench(db: Db, userId: number): Promise<Workbench> {
       .orderBy(status === 'draft' ? 'e.updated_at' : 'e.publish_at', status === 'draft' ? 'desc' : 'asc')
       .limit(50)
       .execute();
-  const [drafts, scheduled, trashedBuilds, trashedEpisodes, transfers] = await Promise.all([
+  const [drafts, scheduled, trashedBuilds, trashedEpisodes, transfers, onOrder] = await Promise.all([
     episodes('draft'),
     episodes('scheduled'),
     db
@@ -76,6 +76,29 @@ export async function getWorkbench(db: Db, userId: number): Promise<Workbench> {
       .select(['b.id', 'b.title', 'u.display_name'])
       .where('b.pending_transfer_to', '=', userId)
       .where('b.deleted_at', 'is', null)
+      .execute(),
+    db
+      .selectFrom('part_lines as pl')
+      .innerJoin('episodes as e', 'e.id', 'pl.episode_id')
+      .innerJoin('builds as b', 'b.id', 'pl.build_id')
+      .innerJoin('build_members as m', (j) => j.onRef('m.build_id', '=', 'b.id').on('m.user_id', '=', userId))
+      .leftJoin('open_items as o', 'o.id', 'pl.open_item_id')
+      .select([
+        'pl.id',
+        'pl.description',
+        'pl.gross_minor',
+        'pl.currency',
+        'b.id as build_id',
+        'b.title as build_title',
+        'e.id as episode_id',
+        'e.number',
+        'o.title as open_item_title',
+      ])
+      .where('pl.status', '=', 'on-order')
+      .where('e.deleted_at', 'is', null)
+      .where('b.deleted_at', 'is', null)
+      .orderBy('pl.created_at')
+      .limit(50)
       .execute(),
   ]);
   const summary = (r: (typeof drafts)[number]) => ({
@@ -122,5 +145,16 @@ export async function getWorkbench(db: Db, userId: number): Promise<Workbench> {
       })),
     ],
     pendingTransfers: transfers.map((t) => ({ buildId: t.id, buildTitle: t.title, fromDisplayName: t.display_name })),
+    onOrder: onOrder.map((l) => ({
+      id: l.id,
+      description: l.description,
+      grossMinor: l.gross_minor,
+      currency: l.currency,
+      buildId: l.build_id,
+      buildTitle: l.build_title,
+      episodeId: l.episode_id,
+      episodeNumber: l.number,
+      openItemTitle: l.open_item_title,
+    })),
   };
 }

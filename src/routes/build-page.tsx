@@ -6,6 +6,8 @@ import { Plate } from '../components/ui/plate';
 import { StateMessage } from '../components/ui/state-message';
 import { formatHours } from '../features/builds/lib/hours';
 import { formatMoney } from '../features/builds/lib/money';
+import { formatMinor } from '../shared/money';
+import type { BuildTotals } from '../shared/schemas/parts';
 import { buildTotalsOptions, useBuildTotals } from '../features/parts/api/get-build-totals';
 import { SpendCharts } from '../features/parts/components/spend-charts';
 import { SpendSummary } from '../features/parts/components/spend-summary';
@@ -108,7 +110,7 @@ function Build({ build }: { build: BuildOverview }) {
         <a href={paths.feeds.build(build.id)}>Follow new episodes with a feed reader (Atom)</a>
       </p>
 
-      <BuildSpend buildId={build.id} />
+      <BuildSpend build={build} />
 
       <section aria-labelledby="episodes-heading" className="mt-10">
         <h2 id="episodes-heading" className="label-condensed border-b-2 border-ink pb-2">
@@ -181,8 +183,8 @@ function Figure({ label, value }: { label: string; value: string }) {
 }
 
 /** Spend by system against budgets, and over the series (lines of published episodes). */
-function BuildSpend({ buildId }: { buildId: number }) {
-  const { data, error } = useBuildTotals(buildId);
+function BuildSpend({ build }: { build: BuildOverview }) {
+  const { data, error } = useBuildTotals(build.id);
   return (
     <section aria-labelledby="spend-heading" className="mt-10">
       <h2 id="spend-heading" className="label-condensed mb-4 border-b-2 border-ink pb-2">
@@ -192,6 +194,7 @@ function BuildSpend({ buildId }: { buildId: number }) {
         data.totals.lines ? (
           <div className="space-y-6">
             <SpendSummary totals={data} />
+            <OnOrder totals={data} build={build} />
             <SpendCharts totals={data} />
           </div>
         ) : (
@@ -203,5 +206,30 @@ function BuildSpend({ buildId }: { buildId: number }) {
         <StateMessage kind="loading" title="Loading the spend figures…" />
       )}
     </section>
+  );
+}
+
+/** What the build is waiting for: lines on order, each with the job it holds up. */
+function OnOrder({ totals, build }: { totals: BuildTotals; build: BuildOverview }) {
+  if (!totals.onOrder.length) return null;
+  const money = (m: number | null) => (m === null ? '—' : formatMinor(m, totals.totals.currency));
+  return (
+    <div>
+      <h3 className="label-condensed mb-2">On order</h3>
+      <ul className="divide-y divide-rule border-y border-rule text-[15px]">
+        {totals.onOrder.map((l) => (
+          <li key={l.id} className="flex flex-wrap items-baseline justify-between gap-x-3 py-2">
+            <span>
+              {l.description}
+              <span className="block text-[14px] text-slate">
+                ordered in <Link to={paths.episode(build.owner.handle, build.slug, l.episode.slug)}>episode {l.episode.number}</Link>
+                {l.openItemTitle ? <> · holds up “{l.openItemTitle}”</> : null}
+              </span>
+            </span>
+            <span className="font-mono text-brass-text">{money(l.grossMinor)}</span>
+          </li>
+        ))}
+      </ul>
+    </div>
   );
 }

@@ -25,6 +25,7 @@ const afterDelete: Workbench = {
     },
   ],
   pendingTransfers: [],
+  onOrder: [],
 };
 
 afterEach(() => {

@@ -5,7 +5,7 @@ import { formatUtcDateTime } from '../components/ui/local-time';
 import type { Workbench } from '../shared/schemas/episodes';
 import { creator, json, makeBuild, makeEpisode, renderApp } from './workbench-test-app';
 
-const emptyWorkbench: Workbench = { builds: [], drafts: [], scheduled: [], deleted: [], pendingTransfers: [] };
+const emptyWorkbench: Workbench = { builds: [], drafts: [], scheduled: [], deleted: [], pendingTransfers: [], onOrder: [] };
 
 const fullWorkbench: Workbench = {
   builds: [
@@ -66,6 +66,19 @@ const fullWorkbench: Workbench = {
     { kind: 'episode', id: 39, title: 'A false start', deletedAt: '2026-11-25T10:00:00.000Z', purgeAfter: '2026-12-25T10:00:00.000Z' },
   ],
   pendingTransfers: [{ buildId: 9, buildTitle: 'Furrow 35 tractor', fromDisplayName: 'Ida Ironside' }],
+  onOrder: [
+    {
+      id: 3,
+      description: 'Front flexible hoses (pair)',
+      grossMinor: 3850,
+      currency: 'EUR',
+      buildId: 7,
+      buildTitle: 'Kestrel hatchback, rust and all',
+      episodeId: 41,
+      episodeNumber: 4,
+      openItemTitle: 'Bleed the brakes',
+    },
+  ],
 };
 
 afterEach(() => {
@@ -100,7 +113,12 @@ describe('Workbench', () => {
     expect(formatUtcDateTime('2026-12-05T17:30:00.000Z')).toBe('5 Dec 2026, 17:30 UTC');
 
     expect(within(screen.getByRole('region', { name: 'Unanswered posts' })).getByText('No unanswered posts.')).toBeTruthy();
-    expect(within(screen.getByRole('region', { name: 'Parts on order' })).getByText('No parts on order.')).toBeTruthy();
+    const onOrder = screen.getByRole('region', { name: 'Parts on order' });
+    expect(within(onOrder).getByRole('link', { name: 'Front flexible hoses (pair)' }).getAttribute('href')).toBe(
+      '/workbench/episodes/41/edit',
+    );
+    expect(within(onOrder).getByText('€38.50')).toBeTruthy();
+    expect(within(onOrder).getByText(/holds up “Bleed the brakes”/)).toBeTruthy();
 
     const deleted = screen.getByRole('region', { name: 'Recently deleted' });
     expect(within(deleted).getByText('A false start')).toBeTruthy();

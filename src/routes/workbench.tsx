@@ -93,7 +93,7 @@ function WorkbenchSections({ data }: { data: Workbench }) {
           <UnansweredPostsPanel />
         </Section>
         <Section id="parts" title="Parts on order">
-          <PartsOnOrderPanel />
+          <PartsOnOrderPanel lines={data.onOrder} />
         </Section>
       </div>
       {data.deleted.length > 0 ? (

@@ -73,6 +73,41 @@ beforeAll(async () => {
       { episode_id: e.id, position: 2, start_seconds: 600, title: 'Bleeding round the circuit', system_key: 'brakes', notes: null },
     ])
     .execute();
+  // A parts line and a torque figure, so the episode page's parts table and figure cards are checked too.
+  await db
+    .insertInto('part_lines')
+    .values({
+      build_id: build.id,
+      episode_id: e.id,
+      position: 0,
+      kind: 'part',
+      description: 'Master cylinder, reconditioned',
+      system_key: 'brakes',
+      at_seconds: 130,
+      source: 'reconditioned',
+      status: 'fitted',
+      quantity: '1',
+      unit_price_minor: 4250,
+      currency: 'EUR',
+      tax_rate_bp: 2000,
+    })
+    .execute();
+  await db
+    .insertInto('figures')
+    .values({
+      episode_id: e.id,
+      position: 0,
+      fastener: 'Master cylinder nuts',
+      thread: 'M10',
+      grade_fitted: '8.8',
+      grade_specified: '8.8',
+      method: 'torque',
+      value: 25,
+      unit: 'N-m',
+      source: 'workshop-manual',
+      system_key: 'brakes',
+    })
+    .execute();
   browser = await launchBrowser();
   tracked = await openPage(browser);
 });
@@ -92,6 +127,15 @@ describe('reading, as a visitor', () => {
     expect(await page.getByRole('heading', { level: 1 }).textContent()).toBe('Master cylinder swap');
     // Brakes are safety-critical: the caution bar sits under the title.
     await expect.poll(() => page.getByRole('note', { name: 'Safety-critical' }).count()).toBe(1);
+
+    // The parts table and the figure, with the reader's unit toggle: 25 N·m ÷ 1.355 818 = 18.4 lbf·ft
+    // (NIST SP 811 Appendix B factor, three significant figures).
+    await page.getByRole('heading', { name: 'Parts in this episode' }).waitFor();
+    expect(await page.getByText('Master cylinder, reconditioned').count()).toBe(1);
+    const units = page.getByRole('group', { name: 'Unit for Master cylinder nuts' });
+    await units.getByRole('button', { name: 'lbf·ft' }).click();
+    await expect.poll(() => units.getByRole('button', { name: 'lbf·ft' }).getAttribute('aria-pressed')).toBe('true');
+    expect(await page.getByText('18.4', { exact: true }).count()).toBe(1);
 
     const rail = page.getByRole('navigation', { name: 'Chapters' });
     await rail.getByRole('link', { name: /Pulling the master cylinder/ }).click();

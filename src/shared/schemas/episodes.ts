@@ -166,5 +166,21 @@ export const workbench = z.object({
     }),
   ),
   pendingTransfers: z.array(z.object({ buildId: z.number().int(), buildTitle: z.string(), fromDisplayName: z.string() })),
+  /** Part lines on order across the creator's builds, oldest first, with the open item each holds up. */
+  onOrder: z
+    .array(
+      z.object({
+        id: z.number().int(),
+        description: z.string(),
+        grossMinor: z.number().int(),
+        currency: z.string(),
+        buildId: z.number().int(),
+        buildTitle: z.string(),
+        episodeId: z.number().int(),
+        episodeNumber: z.number().int(),
+        openItemTitle: z.string().nullable(),
+      }),
+    )
+    .default([]),
 });
 export type Workbench = z.infer<typeof workbench>;

@@ -200,6 +200,16 @@ export const buildTotals = z.object({
       cumulativeMinor: z.number().int(),
     }),
   ),
+  /** Lines on order (at most 20), in the build's currency, with the open item each holds up. */
+  onOrder: z.array(
+    z.object({
+      id: z.number().int(),
+      description: z.string(),
+      grossMinor: z.number().int().nullable(),
+      episode: z.object({ number: z.number().int(), slug: z.string() }),
+      openItemTitle: z.string().nullable(),
+    }),
+  ),
   /** True when lines of unpublished episodes are included (the build team's view). */
   includesUnpublished: z.boolean(),
 });

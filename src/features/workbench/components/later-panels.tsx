@@ -1,6 +1,10 @@
+import { Link } from 'react-router';
 import { StateMessage } from '../../../components/ui/state-message';
+import { formatMinor } from '../../../shared/money';
+import type { Workbench } from '../../../shared/schemas/episodes';
+import { workbenchPaths } from '../paths';
 
-/** Panels the posts and parts issues fill; until then each says what will show here. */
+/** The posts panel is filled by the followers issue; until then it says what will show there. */
 export function UnansweredPostsPanel() {
   return (
     <StateMessage kind="empty" title="No unanswered posts.">
@@ -9,10 +13,30 @@ export function UnansweredPostsPanel() {
   );
 }
 
-export function PartsOnOrderPanel() {
+/** Part lines on order across the creator's builds, each linked to its episode's editor. */
+export function PartsOnOrderPanel({ lines }: { lines: Workbench['onOrder'] }) {
+  if (!lines.length)
+    return (
+      <StateMessage kind="empty" title="No parts on order.">
+        <p>Part lines marked “on order” show here until they arrive, with the open item they hold up.</p>
+      </StateMessage>
+    );
   return (
-    <StateMessage kind="empty" title="No parts on order.">
-      <p>Part lines marked “on order” show here until they arrive, with the open item they hold up.</p>
-    </StateMessage>
+    <ul className="divide-y divide-rule border-y border-rule">
+      {lines.map((l) => (
+        <li key={l.id} className="flex flex-wrap items-baseline justify-between gap-x-3 py-2.5">
+          <span className="min-w-0">
+            <Link to={workbenchPaths.episodeEditor(l.episodeId)} className="font-semibold">
+              {l.description}
+            </Link>
+            <span className="block text-[14px] text-slate">
+              {l.buildTitle} · ep. {l.episodeNumber}
+              {l.openItemTitle ? <> · holds up “{l.openItemTitle}”</> : null}
+            </span>
+          </span>
+          <span className="font-mono text-brass-text">{formatMinor(l.grossMinor, l.currency)}</span>
+        </li>
+      ))}
+    </ul>
   );
 }
