@@ -69,6 +69,11 @@ describe('demo seed', () => {
       .select(['id', 'episode_id', 'position', 'fastener', 'value', 'unit'])
       .orderBy('id')
       .execute(),
+    partLines: await handle.db
+      .selectFrom('part_lines')
+      .select(['id', 'episode_id', 'position', 'description', 'gross_minor', 'status', 'open_item_id'])
+      .orderBy('id')
+      .execute(),
     openItems: await handle.db
       .selectFrom('open_items')
       .select(['id', 'title', 'opened_in_episode_id', 'closed_in_episode_id'])
@@ -95,7 +100,22 @@ describe('demo seed', () => {
     await runSeed(handle.db);
     expect(await snapshot()).toEqual(first);
     const runs = await handle.db.selectFrom('seed_runs').select(['section']).orderBy('section').execute();
-    expect(runs.map((r) => r.section)).toEqual(['demo-accounts', 'demo-builds', 'demo-figures']);
+    expect(runs.map((r) => r.section)).toEqual(['demo-accounts', 'demo-builds', 'demo-figures', 'demo-parts']);
+
+    // The parts issue's demo: reused and made lines with an avoided cost, lines on order tied to open items,
+    // a line in another currency, a part sold off, per-system budgets with one system over its budget.
+    const lines = await handle.db.selectFrom('part_lines').selectAll().execute();
+    expect(lines.some((l) => (l.source === 'reused' || l.source === 'made') && l.avoided_cost_minor !== null)).toBe(true);
+    expect(lines.some((l) => l.status === 'on-order' && l.open_item_id !== null)).toBe(true);
+    expect(lines.some((l) => l.fx_rate !== null)).toBe(true);
+    expect(lines.some((l) => l.kind === 'sale')).toBe(true);
+    const over = await sql<{ key: string }>`
+      select s.key from build_systems s
+       where s.budget_minor < (select coalesce(sum(gross_minor), 0) from part_lines pl
+                                where pl.build_id = s.build_id and pl.system_key = s.key and pl.status in ('arrived', 'fitted'))`.execute(
+      handle.db,
+    );
+    expect(over.rows.map((r) => r.key)).toEqual(['cooling']);
 
     // The figures issue's demo: mixed units, one by hand below the wrench's range, one weaker substitute, one torque plus angle.
     const figures = (

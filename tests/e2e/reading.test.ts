@@ -135,7 +135,8 @@ describe('reading, as a visitor', () => {
     const units = page.getByRole('group', { name: 'Unit for Master cylinder nuts' });
     await units.getByRole('button', { name: 'lbf·ft' }).click();
     await expect.poll(() => units.getByRole('button', { name: 'lbf·ft' }).getAttribute('aria-pressed')).toBe('true');
-    expect(await page.getByText('18.4', { exact: true }).count()).toBe(1);
+    await expect.poll(() => page.locator('li', { hasText: 'Master cylinder nuts' }).first().textContent()).toMatch(/18\.4\s*lbf·ft/);
+    expect(await page.locator('li', { hasText: 'Master cylinder nuts' }).first().textContent()).toMatch(/Recorded as 25 N·m/);
 
     const rail = page.getByRole('navigation', { name: 'Chapters' });
     await rail.getByRole('link', { name: /Pulling the master cylinder/ }).click();

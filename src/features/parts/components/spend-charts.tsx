@@ -20,7 +20,8 @@ export function SpendCharts({ totals }: { totals: BuildTotals }) {
   const systems = totals.bySystem.filter((s) => s.spentMinor || s.committedMinor || s.plannedMinor || s.budgetMinor);
   return (
     <div className="space-y-6">
-      <div aria-hidden="true" className="min-h-[260px] border border-rule bg-card p-3">
+      {/* Inert as well as hidden: the figures are in the tables below, and nothing in a drawing takes focus. */}
+      <div aria-hidden="true" inert className="min-h-[260px] border border-rule bg-card p-3">
         {mounted ? (
           <Suspense fallback={null}>
             <SpendChartsDrawing totals={totals} />
