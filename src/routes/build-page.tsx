@@ -110,7 +110,6 @@ function Build({ build }: { build: BuildOverview }) {
         <a href={paths.feeds.build(build.id)}>Follow new episodes with a feed reader (Atom)</a>
       </p>
 
-      <BuildSpend build={build} />
 
       <section aria-labelledby="episodes-heading" className="mt-10">
         <h2 id="episodes-heading" className="label-condensed border-b-2 border-ink pb-2">
@@ -148,6 +147,8 @@ function Build({ build }: { build: BuildOverview }) {
           </div>
         )}
       </section>
+
+      <BuildSpend build={build} />
 
       <section aria-labelledby="open-heading" className="mt-10">
         <h2 id="open-heading" className="label-condensed border-b-2 border-ink pb-2">
