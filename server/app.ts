@@ -11,6 +11,7 @@ import { apiNotFound, errorHandler } from './http/error-handler';
 import { buildApiRouter } from './http/registry';
 import { routeRegistry } from './routes';
 import { feedRouter } from './feeds/atom';
+import { filesRouter } from './media/files';
 import { createPageRenderer, distPaths } from './ssr/page-renderer';
 
 /** Express's trust-proxy value from config: a hop count, true/false, or names/addresses. */
@@ -80,6 +81,7 @@ export function createApp(deps: AppDeps): Express {
   app.use('/auth', sessions, githubAuthRouter(deps));
 
   app.use(feedRouter(deps));
+  app.use(filesRouter(deps, [sessions, actor]));
 
   const { client } = distPaths(config.DIST_DIR);
   // Hashed assets never change under their name: cache them for a year.

@@ -63,3 +63,9 @@ export async function figureResource(deps: AppDeps, params: { figureId: number }
   const f = await deps.db.selectFrom('figures').select('episode_id').where('id', '=', params.figureId).executeTakeFirst();
   return f ? episodeResource(deps, { episodeId: f.episode_id }) : null;
 }
+
+/** The build a stored file (`:mediaId`) belongs to; files of sponsor organisations come with the sponsors issue. */
+export async function mediaResource(deps: AppDeps, params: { mediaId: number }): Promise<Resource | null> {
+  const m = await deps.db.selectFrom('media').select('build_id').where('id', '=', params.mediaId).executeTakeFirst();
+  return m?.build_id ? buildResource(deps, { buildId: m.build_id }) : null;
+}

@@ -111,6 +111,7 @@ export interface BuildsTable {
   budget_minor: number | null;
   video_link_pattern: Generated<string>;
   pending_transfer_to: number | null;
+  cover_media_id: Generated<number | null>;
   deleted_at: NullableTimestamp;
   created_at: Generated<Date>;
   updated_at: Generated<Date>;
@@ -215,6 +216,7 @@ export interface EpisodesTable {
   publish_error: string | null;
   version: Generated<number>;
   deleted_at: NullableTimestamp;
+  cover_media_id: Generated<number | null>;
   created_at: Generated<Date>;
   updated_at: Generated<Date>;
 }
@@ -298,11 +300,41 @@ export interface PartLinesTable {
   buy_url: string | null;
   affiliate: Generated<boolean>;
   open_item_id: number | null;
+  receipt_media_id: Generated<number | null>;
   created_at: Generated<Date>;
   updated_at: Generated<Date>;
   net_minor: ColumnType<number, never, never>;
   tax_minor: ColumnType<number, never, never>;
   gross_minor: ColumnType<number, never, never>;
+}
+
+export type MediaKindColumn = 'photo' | 'receipt' | 'logo';
+
+/** A stored file (migration 2026-12-02_1830): its object key in S3, its variants and its owner. */
+export interface MediaTable {
+  id: Generated<number>;
+  build_id: number | null;
+  sponsor_id: number | null;
+  kind: MediaKindColumn;
+  sha256: string;
+  object_key: string;
+  content_type: string;
+  size_bytes: number;
+  width: number | null;
+  height: number | null;
+  alt_text: string | null;
+  placeholder: string | null;
+  status: Generated<'processing' | 'ready' | 'failed'>;
+  variants: ColumnType<unknown, string | undefined, string>;
+  created_by: number | null;
+  created_at: Generated<Date>;
+}
+
+export interface EpisodeGalleryTable {
+  id: Generated<number>;
+  episode_id: number;
+  media_id: number;
+  position: number;
 }
 
 export interface Database {
@@ -328,5 +360,7 @@ export interface Database {
   currencies: CurrenciesTable;
   suppliers: SuppliersTable;
   part_lines: PartLinesTable;
+  media: MediaTable;
+  episode_gallery: EpisodeGalleryTable;
   figures: FiguresTable;
 }

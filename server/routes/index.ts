@@ -4,6 +4,7 @@ import { adminRoutes } from './admin';
 import { buildRoutes } from './builds';
 import { episodeEditorRoutes } from './episode-editor';
 import { figureRoutes } from './figures';
+import { mediaRoutes } from './media';
 import { openItemRoutes } from './open-items';
 import { partLineRoutes } from './part-lines';
 import { readingRoutes } from './reading';
@@ -28,4 +29,5 @@ export const routeRegistry: readonly RouteSpec[] = [
   ...workbenchRoutes,
   ...readingRoutes,
   ...partLineRoutes,
+  ...mediaRoutes,
 ];

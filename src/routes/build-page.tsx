@@ -110,7 +110,6 @@ function Build({ build }: { build: BuildOverview }) {
         <a href={paths.feeds.build(build.id)}>Follow new episodes with a feed reader (Atom)</a>
       </p>
 
-
       <section aria-labelledby="episodes-heading" className="mt-10">
         <h2 id="episodes-heading" className="label-condensed border-b-2 border-ink pb-2">
           Episodes in order
