@@ -66,6 +66,8 @@ export async function figureResource(deps: AppDeps, params: { figureId: number }
 
 /** The build a stored file (`:mediaId`) belongs to; files of sponsor organisations come with the sponsors issue. */
 export async function mediaResource(deps: AppDeps, params: { mediaId: number }): Promise<Resource | null> {
-  const m = await deps.db.selectFrom('media').select('build_id').where('id', '=', params.mediaId).executeTakeFirst();
-  return m?.build_id ? buildResource(deps, { buildId: m.build_id }) : null;
+  const m = await deps.db.selectFrom('media').select(['build_id', 'kind']).where('id', '=', params.mediaId).executeTakeFirst();
+  const build = m?.build_id ? await buildResource(deps, { buildId: m.build_id }) : null;
+  // A receipt is the build team's alone, whatever the build's visibility: to anyone else it does not exist (404).
+  return build && m?.kind === 'receipt' && build.kind === 'build' ? { ...build, visibility: 'private' } : build;
 }

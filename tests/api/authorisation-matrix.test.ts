@@ -26,6 +26,8 @@ interface World {
     openItem: number;
     partLine: number;
     figure: number;
+    photo: number;
+    receipt: number;
   };
   slugs: { owner: string; buildA: string; draft: string };
   clients: Record<ActorName, TestClient>;
@@ -215,6 +217,13 @@ const matrix: Record<string, { request: (w: World) => { path: string; body?: unk
   },
   'GET /suppliers': { request: () => ({ path: '/api/suppliers?q=a' }), expect: signedIn(200) },
   'POST /suppliers': { request: () => ({ path: '/api/suppliers', body: { name: '' } }), expect: signedIn(400) },
+  // Media: the build team uploads and manages; a photo of a public build is public; a receipt is the
+  // build team's alone (404 for everyone else, admins included).
+  'POST /builds/:buildId/media': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}/media`, body: {} }), expect: teamOnly(400) },
+  'GET /media/:mediaId': { request: (w) => ({ path: `/api/media/${w.ids.photo}` }), expect: all(200) },
+  'PATCH /media/:mediaId': { request: (w) => ({ path: `/api/media/${w.ids.photo}`, body: {} }), expect: teamOnly(400) },
+  'DELETE /media/:mediaId': { request: (w) => ({ path: `/api/media/${w.ids.photo}` }), expect: teamOnly(204), freshWorldPerActor: true },
+  'GET /media/:mediaId/download': { request: (w) => ({ path: `/api/media/${w.ids.receipt}/download` }), expect: draftTeam(200) },
   'POST /admin/suppliers/:supplierId/merge': {
     request: () => ({ path: '/api/admin/suppliers/1/merge', body: {} }),
     expect: adminOnly(400),
@@ -321,6 +330,24 @@ async function makeWorld(visibility: 'public' | 'unlisted' | 'private' = 'public
     })
     .returning('id')
     .executeTakeFirstOrThrow();
+  const media = (kind: 'photo' | 'receipt', sha: string) =>
+    db
+      .insertInto('media')
+      .values({
+        build_id: buildA.id,
+        kind,
+        sha256: sha,
+        object_key: `builds/${buildA.id}/${kind}/${sha}/original.${kind === 'photo' ? 'png' : 'pdf'}`,
+        content_type: kind === 'photo' ? 'image/png' : 'application/pdf',
+        size_bytes: 4,
+        width: kind === 'photo' ? 10 : null,
+        height: kind === 'photo' ? 10 : null,
+      })
+      .returning(['id', 'object_key'])
+      .executeTakeFirstOrThrow();
+  const photo = await media('photo', 'a'.repeat(64));
+  const receipt = await media('receipt', 'b'.repeat(64));
+  await app.deps.storage.put(receipt.object_key, Buffer.from('%PDF'), 'application/pdf');
   return {
     ids: {
       buildA: buildA.id,
@@ -331,6 +358,8 @@ async function makeWorld(visibility: 'public' | 'unlisted' | 'private' = 'public
       openItem: item.id,
       partLine: partLine.id,
       figure: figure.id,
+      photo: photo.id,
+      receipt: receipt.id,
     },
     slugs: { owner: ownerRow.handle, buildA: buildA.slug, draft: draft.slug },
     clients,
