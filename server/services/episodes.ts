@@ -2,12 +2,13 @@ import { sql, type Kysely } from 'kysely';
 import { needsCaution } from '../../src/shared/safety';
 import type { Episode, EpisodeCreate, EpisodeUpdate } from '../../src/shared/schemas/episodes';
 import { slugify } from '../../src/shared/slug';
-import { EMPTY_WRITE_UP, type WriteUpDoc } from '../../src/shared/write-up';
+import { EMPTY_WRITE_UP, writeUpImageIds, type WriteUpDoc } from '../../src/shared/write-up';
 import type { Database } from '../db/database';
 import type { Db } from '../db/kysely';
 import { HttpError } from '../http/http-error';
 import { figureSystemKeys } from './figures';
-import { renderWriteUp } from './write-up-html';
+import { renderWriteUp, type WriteUpImages } from './write-up-html';
+import { presentImage } from '../presenters/media';
 
 type Trx = Kysely<Database>;
 
@@ -119,6 +120,39 @@ export async function getEpisode(db: Db | Trx, episodeId: number): Promise<Episo
   };
 }
 
+/** The write-up's pictures, which must be photos of this build (400 naming the write-up otherwise), and alt text synced. */
+async function writeUpImages(trx: Trx, buildId: number, doc: WriteUpDoc): Promise<WriteUpImages> {
+  const ids = [...new Set(writeUpImageIds(doc))];
+  if (!ids.length) return new Map();
+  const rows = await trx
+    .selectFrom('media')
+    .selectAll()
+    .where('id', 'in', ids)
+    .where('build_id', '=', buildId)
+    .where('kind', '=', 'photo')
+    .execute();
+  if (rows.length !== ids.length)
+    throw new HttpError(400, 'invalid_request', 'A picture in the write-up is not a photo of this build', {
+      writeUp: ['a picture is not a photo of this build'],
+    });
+  // The alt text typed in the editor is the photo's own.
+  const walk = (nodes: WriteUpDoc['content']) => {
+    for (const n of nodes ?? []) {
+      if (n.type === 'mediaImage' && n.attrs.alt.trim()) alts.set(n.attrs.mediaId, n.attrs.alt.trim());
+      if ('content' in n && Array.isArray(n.content)) walk(n.content as WriteUpDoc['content']);
+    }
+  };
+  const alts = new Map<number, string>();
+  walk(doc.content);
+  for (const [id, alt] of alts) await trx.updateTable('media').set({ alt_text: alt }).where('id', '=', id).execute();
+  const out = new Map<number, { src: string; srcset: string; width: number; height: number }>();
+  for (const r of rows) {
+    const img = presentImage(r);
+    if (img) out.set(r.id, { src: img.src, srcset: img.srcset, width: img.width, height: img.height });
+  }
+  return out;
+}
+
 /** Locks the episode and checks the editor's version; returns the locked row. */
 async function lockAt(trx: Trx, episodeId: number, version: number) {
   const row = await trx.selectFrom('episodes').selectAll().where('id', '=', episodeId).forUpdate().executeTakeFirstOrThrow();
@@ -176,7 +210,12 @@ export async function updateEpisode(db: Db, episodeId: number, input: EpisodeUpd
         ...(input.title !== undefined ? { title: input.title } : {}),
         ...(input.number !== undefined ? { number: input.number } : {}),
         ...(input.summary !== undefined ? { summary: input.summary } : {}),
-        ...(input.writeUp !== undefined ? { write_up: JSON.stringify(input.writeUp), write_up_html: renderWriteUp(input.writeUp) } : {}),
+        ...(input.writeUp !== undefined
+          ? {
+              write_up: JSON.stringify(input.writeUp),
+              write_up_html: renderWriteUp(input.writeUp, await writeUpImages(trx, row.build_id, input.writeUp)),
+            }
+          : {}),
         ...(input.videoUrl !== undefined ? { video_url: input.videoUrl } : {}),
         ...(input.durationSeconds !== undefined ? { duration_seconds: input.durationSeconds } : {}),
         ...(input.hoursWorked !== undefined
@@ -233,4 +272,26 @@ export async function restoreEpisode(db: Db, episodeId: number): Promise<void> {
     .where('deleted_at', '>', sql<Date>`now() - interval '30 days'`)
     .executeTakeFirst();
   if (!r.numUpdatedRows) throw new HttpError(409, 'not_in_trash', 'This episode is not in the trash (or was removed for good)');
+}
+
+/** Renders again the stored HTML of every episode whose write-up shows this photo (its sizes are ready now). */
+export async function rerenderWriteUpsShowing(db: Db, mediaId: number): Promise<number> {
+  const rows = await db
+    .selectFrom('episodes')
+    .select(['id', 'build_id', 'write_up'])
+    .where(
+      sql<boolean>`jsonb_path_exists(write_up, '$.** ? (@.type == "mediaImage" && @.attrs.mediaId == $id)', jsonb_build_object('id', ${mediaId}::bigint))`,
+    )
+    .execute();
+  for (const r of rows) {
+    await db.transaction().execute(async (trx) => {
+      const doc = r.write_up as WriteUpDoc;
+      await trx
+        .updateTable('episodes')
+        .set({ write_up_html: renderWriteUp(doc, await writeUpImages(trx, r.build_id, doc)) })
+        .where('id', '=', r.id)
+        .execute();
+    });
+  }
+  return rows.length;
 }

@@ -1,5 +1,5 @@
 import { validateChapters } from '../../src/shared/chapters';
-import { writeUpText, type WriteUpDoc } from '../../src/shared/write-up';
+import { writeUpImageIds, writeUpText, type WriteUpDoc } from '../../src/shared/write-up';
 import type { Db } from '../db/kysely';
 
 export interface PublishProblem {
@@ -30,8 +30,25 @@ const chaptersInOrder: PublishCheck = (ctx) =>
     message: p.message,
   }));
 
+/** Every picture readers will see needs its words for people who cannot see it (the media issue). */
+const picturesHaveAltText: PublishCheck = async (ctx, db) => {
+  const ids = writeUpImageIds(ctx.writeUp);
+  if (!ids.length) return [];
+  const rows = await db.selectFrom('media').select(['id', 'alt_text']).where('id', 'in', ids).execute();
+  const alt = new Map(rows.map((r) => [r.id, r.alt_text?.trim() ?? '']));
+  const missing = ids.filter((id) => !alt.get(id));
+  return missing.length
+    ? [
+        {
+          field: 'writeUp',
+          message: `Describe ${missing.length === 1 ? 'the picture' : `${missing.length} pictures`} in the write-up (alt text) before publishing`,
+        },
+      ]
+    : [];
+};
+
 /** Every publish rule; later features add theirs here (the sponsors' disclosure rule, for one). */
-export const publishChecks: PublishCheck[] = [hasTitle, hasWriteUp, chaptersInOrder];
+export const publishChecks: PublishCheck[] = [hasTitle, hasWriteUp, chaptersInOrder, picturesHaveAltText];
 
 /** Runs every rule against the episode as it is stored now. */
 export async function runPublishChecks(db: Db, episodeId: number): Promise<PublishProblem[]> {

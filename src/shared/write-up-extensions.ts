@@ -1,5 +1,6 @@
 import type { Extensions } from '@tiptap/core';
 import { StarterKit } from '@tiptap/starter-kit';
+import { MediaImage } from './media-image-node';
 import { isAllowedWriteUpHref } from './write-up';
 
 // One Tiptap configuration for the editor and the server renderer, so that what the editor lets a
@@ -23,5 +24,6 @@ export function writeUpExtensionList(): Extensions {
         HTMLAttributes: { target: null, rel: 'noopener noreferrer nofollow', class: null },
       },
     }),
+    MediaImage,
   ];
 }

@@ -27,7 +27,10 @@ export type WriteUpBlock =
   | { type: 'blockquote'; content: WriteUpBlock[] }
   | { type: 'bulletList'; content: WriteUpListItem[] }
   | { type: 'orderedList'; attrs?: WriteUpOrderedListAttrs; content: WriteUpListItem[] }
-  | { type: 'horizontalRule' };
+  | { type: 'horizontalRule' }
+  | WriteUpImage;
+/** A photo stored with the build's media (by id, never a data or foreign URL); `src` is for the editor's preview only. */
+export type WriteUpImage = { type: 'mediaImage'; attrs: { mediaId: number; alt: string; src?: string | null } };
 export type WriteUpNode = WriteUpBlock | WriteUpListItem | WriteUpInline;
 export type WriteUpDoc = { type: 'doc'; content?: WriteUpBlock[] };
 
@@ -143,6 +146,19 @@ const block: z.ZodType<WriteUpBlock> = z.discriminatedUnion(
       content: listItems,
     }),
     z.object({ type: z.literal('horizontalRule') }),
+    z.object({
+      type: z.literal('mediaImage'),
+      attrs: z.object({
+        mediaId: z.number().int().positive(),
+        alt: z.string().trim().max(300),
+        src: z
+          .string()
+          .max(300)
+          .regex(/^\/files\/\d+\/[0-9a-f]{64}\/[a-z0-9.]+$/, 'A picture stored with this build')
+          .nullable()
+          .optional(),
+      }),
+    }),
   ],
   { error: notAllowed('A') },
 );
@@ -153,6 +169,19 @@ const docShape = z.object({ type: z.literal('doc', { error: 'A write-up is a “
 export const writeUpDoc: z.ZodType<WriteUpDoc> = z.unknown().superRefine(checkLimits).pipe(docShape);
 
 export const EMPTY_WRITE_UP: WriteUpDoc = { type: 'doc', content: [{ type: 'paragraph' }] };
+
+/** The stored photos a write-up shows, by media id, in order. */
+export function writeUpImageIds(doc: WriteUpDoc): number[] {
+  const ids: number[] = [];
+  const walk = (nodes: ReadonlyArray<{ type: string; attrs?: unknown; content?: unknown }> | undefined) => {
+    for (const n of nodes ?? []) {
+      if (n.type === 'mediaImage') ids.push((n.attrs as { mediaId: number }).mediaId);
+      if (Array.isArray(n.content)) walk(n.content as Array<{ type: string }>);
+    }
+  };
+  walk(doc.content);
+  return ids;
+}
 
 /** Plain text of a write-up (for summaries and search): one line per block, hard breaks kept. */
 export function writeUpText(doc: WriteUpDoc): string {

@@ -254,3 +254,55 @@ describe('faults and orphans', () => {
     expect(await objectKeys(`builds/${buildId}/photo/${hash}`)).toEqual([]);
   });
 });
+
+describe('pictures in the write-up', () => {
+  it('renders a stored photo with srcset and alt, refuses other builds’ photos, and asks for alt text before publishing', async () => {
+    const db = app.deps.db;
+    const e = await db
+      .insertInto('episodes')
+      .values({
+        build_id: buildId,
+        number: 50,
+        slug: 'pictures',
+        title: 'Pictures',
+        status: 'draft',
+        write_up: JSON.stringify({ type: 'doc', content: [] }),
+      })
+      .returning(['id', 'version'])
+      .executeTakeFirstOrThrow();
+    const png = await sharp({ create: { width: 1000, height: 500, channels: 3, background: '#776655' } })
+      .png()
+      .toBuffer();
+    const photo = await upload(owner, png, 'bench.png');
+    const doc = (alt: string, mediaId = photo.body.id) => ({
+      type: 'doc',
+      content: [
+        { type: 'paragraph', content: [{ type: 'text', text: 'The caliper, cleaned.' }] },
+        { type: 'mediaImage', attrs: { mediaId, alt, src: photo.body.src } },
+      ],
+    });
+    const saved = await owner.patch(`/api/episodes/${e.id}`, { version: e.version, writeUp: doc('') });
+    expect(saved.status).toBe(200);
+    expect(saved.body.writeUpHtml).toMatch(/<img src="\/files\/\d+\/[0-9a-f]{64}\/original\.png"/);
+    const refused = await owner.post(`/api/episodes/${e.id}/publish`, { version: saved.body.version });
+    expect(refused.status).toBe(422);
+    expect(refused.body.error.message).toMatch(/alt text/);
+
+    const other = await upload(owner, png, 'elsewhere.png', {}, privateBuildId);
+    const foreign = await owner.patch(`/api/episodes/${e.id}`, { version: saved.body.version, writeUp: doc('x', other.body.id) });
+    expect(foreign.status).toBe(400);
+    expect(foreign.body.error.fields).toHaveProperty('writeUp');
+
+    const withAlt = await owner.patch(`/api/episodes/${e.id}`, { version: saved.body.version, writeUp: doc('Caliper body on the bench') });
+    expect(withAlt.status).toBe(200);
+    await app.runJobs();
+    const html = (await db.selectFrom('episodes').select('write_up_html').where('id', '=', e.id).executeTakeFirstOrThrow()).write_up_html;
+    expect(html).toMatch(
+      /srcset="\/files\/\d+\/[0-9a-f]{64}\/w320\.webp 320w, \/files\/\d+\/[0-9a-f]{64}\/w960\.webp 960w, \/files\/\d+\/[0-9a-f]{64}\/w1000\.webp 1000w"/,
+    );
+    expect(html).toContain('alt="Caliper body on the bench"');
+    expect(html).toContain('width="1000" height="500"');
+    const published = await owner.post(`/api/episodes/${e.id}/publish`, { version: withAlt.body.version });
+    expect(published.status).toBe(200);
+  });
+});

@@ -335,3 +335,32 @@ describe('XSS payloads never reach readers', () => {
     );
   });
 });
+
+describe('pictures in the write-up', () => {
+  it("keeps only this site's media addresses in <img>, and drops pictures with any other source", async () => {
+    const { sanitizeWriteUpHtml } = await import('../../server/services/write-up-html');
+    const sha = 'c'.repeat(64);
+    const ok = sanitizeWriteUpHtml(
+      `<img src="/files/4/${sha}/w960.webp" srcset="/files/4/${sha}/w320.webp 320w, https://evil.example/x.webp 960w" alt="Bench" width="960" height="480" onerror="alert(1)" style="x">`,
+    );
+    expect(ok).toBe(
+      `<img src="/files/4/${sha}/w960.webp" srcset="/files/4/${sha}/w320.webp 320w" width="960" height="480" alt="Bench" sizes="(min-width: 64rem) 68ch, 100vw" loading="lazy" decoding="async" />`,
+    );
+    for (const src of [
+      'https://evil.example/a.png',
+      'javascript:alert(1)',
+      'data:image/png;base64,AAAA',
+      '//evil.example/a.png',
+      '/files/../etc/passwd',
+    ])
+      expect(sanitizeWriteUpHtml(`<p>a</p><img src="${src}" alt="x">`), src).toBe('<p>a</p>');
+  });
+
+  it('accepts a mediaImage node and refuses one with a foreign src', () => {
+    const sha = 'd'.repeat(64);
+    const good = { type: 'doc', content: [{ type: 'mediaImage', attrs: { mediaId: 3, alt: 'Hub', src: `/files/3/${sha}/original.png` } }] };
+    expect(writeUpDoc.safeParse(good).success).toBe(true);
+    const bad = { type: 'doc', content: [{ type: 'mediaImage', attrs: { mediaId: 3, alt: 'Hub', src: 'https://evil.example/a.png' } }] };
+    expect(writeUpDoc.safeParse(bad).success).toBe(false);
+  });
+});

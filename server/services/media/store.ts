@@ -2,6 +2,7 @@ import type { Kysely } from 'kysely';
 import { ListObjectsV2Command } from '@aws-sdk/client-s3';
 import type { AppDeps } from '../../app-deps';
 import { HttpError } from '../../http/http-error';
+import { rerenderWriteUpsShowing } from '../episodes';
 import { inspectUpload, type MediaKind } from './inspect';
 import { cleanOriginal, makeVariants, sha256, type Variant } from './pipeline';
 
@@ -95,6 +96,8 @@ export async function makeMediaVariants(deps: AppDeps, mediaId: number): Promise
     .set({ variants: JSON.stringify(stored), placeholder, status: 'ready' })
     .where('id', '=', mediaId)
     .execute();
+  // Write-ups saved while the sizes were being made point at the original: give them the sizes now.
+  await rerenderWriteUpsShowing(deps.db, mediaId);
 }
 
 /** Every object key a row points at: the original and its variants. */
