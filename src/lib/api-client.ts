@@ -37,6 +37,16 @@ export interface ApiClient {
   del<S extends z.ZodType>(path: string, schema: S, signal?: AbortSignal): Promise<z.infer<S>>;
   /** Drops the cached CSRF token; call it whenever the session changes (sign-in, sign-out, deletion). */
   forgetCsrfToken(): void;
+  /**
+   * POSTs a multipart form with upload progress (XMLHttpRequest: fetch reports no upload progress).
+   * Browser only. `onProgress` gets 0…1; aborting the signal cancels the upload (ApiError status 0).
+   */
+  upload<S extends z.ZodType>(
+    path: string,
+    form: FormData,
+    schema: S,
+    opts?: { onProgress?: (share: number) => void; signal?: AbortSignal },
+  ): Promise<z.infer<S>>;
 }
 
 /** For 204 answers: whatever arrives (normally nothing) is read as `undefined`. */
@@ -106,6 +116,29 @@ export function createApiClient(options: ApiClientOptions = {}): ApiClient {
     del: (path, schema, signal) => request('DELETE', path, schema, undefined, signal),
     forgetCsrfToken: () => {
       csrfToken = undefined;
+    },
+    upload: async (path, form, schema, opts = {}) => {
+      const token = await getCsrfToken();
+      const ex = await new Promise<Exchange>((resolve, reject) => {
+        const xhr = new XMLHttpRequest();
+        xhr.open('POST', `${baseUrl}${path}`);
+        xhr.setRequestHeader('accept', 'application/json');
+        xhr.setRequestHeader(CSRF_HEADER, token);
+        xhr.upload.onprogress = (e) => {
+          if (e.lengthComputable) opts.onProgress?.(e.loaded / e.total);
+        };
+        xhr.onload = () => {
+          const headers = new Headers();
+          const retry = xhr.getResponseHeader('retry-after');
+          if (retry) headers.set('retry-after', retry);
+          resolve({ res: new Response(null, { status: xhr.status, headers }), json: safeJson(xhr.responseText) });
+        };
+        xhr.onerror = () => reject(new ApiError(0, 'network_error', 'The upload could not reach the server'));
+        xhr.onabort = () => reject(new ApiError(0, 'aborted', 'The upload was cancelled'));
+        opts.signal?.addEventListener('abort', () => xhr.abort(), { once: true });
+        xhr.send(form);
+      });
+      return read(ex, schema);
     },
   };
 }

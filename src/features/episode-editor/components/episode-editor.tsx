@@ -102,7 +102,12 @@ export function EpisodeEditor({ episode, build }: EpisodeEditorProps) {
       <div className="mt-6 grid gap-10 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="min-w-0 space-y-10">
           <EpisodeFields draft={draft} errors={errors} onChange={change} />
-          <WriteUpEditor value={draft.writeUp} onChange={(writeUp) => change({ writeUp })} error={snapshot.rejected.writeUp} />
+          <WriteUpEditor
+            buildId={server.buildId}
+            value={draft.writeUp}
+            onChange={(writeUp) => change({ writeUp })}
+            error={snapshot.rejected.writeUp}
+          />
           <ChaptersPanel
             rows={draft.chapters}
             onChange={(chapters) => change({ chapters })}

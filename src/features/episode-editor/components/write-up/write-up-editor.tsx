@@ -3,9 +3,12 @@ import { useEffect, useId, useRef, useState } from 'react';
 import { writeUpExtensionList } from '../../../../shared/write-up-extensions';
 import type { WriteUpDoc } from '../../../../shared/write-up';
 import { LinkDialog } from './link-dialog';
+import { PictureUploads, usePictureUploads } from './picture-uploads';
 import { WriteUpToolbar } from './write-up-toolbar';
 
 interface WriteUpEditorProps {
+  /** Pictures are stored with the build. */
+  buildId: number;
   value: WriteUpDoc;
   onChange: (doc: WriteUpDoc) => void;
   /** The server's message about the write-up, when it refused one. */
@@ -22,6 +25,7 @@ const proseClass = [
   '[&_blockquote]:my-3 [&_blockquote]:border-l-4 [&_blockquote]:border-rule [&_blockquote]:pl-4 [&_blockquote]:text-ink-2',
   '[&_code]:bg-paper-2 [&_code]:px-1 [&_code]:font-mono [&_code]:text-[15px] [&_pre]:overflow-x-auto [&_pre]:bg-paper-2 [&_pre]:p-3',
   '[&_a]:text-oxide-2 [&_a]:underline',
+  '[&_img]:my-3 [&_img]:block [&_img]:h-auto [&_img]:max-w-full [&_img]:border [&_img]:border-rule [&_.ProseMirror-selectednode]:outline-2 [&_.ProseMirror-selectednode]:outline-oxide',
 ].join(' ');
 
 function contentAttributes(id: string, error: string | undefined): Record<string, string> {
@@ -36,13 +40,26 @@ function contentAttributes(id: string, error: string | undefined): Record<string
   };
 }
 
-/** The write-up editor: Tiptap with the shared extension list (no images until the media issue). */
-export function WriteUpEditor({ value, onChange, error }: WriteUpEditorProps) {
+/** Files from a drop or a paste go to the uploads; true tells the editor the event is handled. */
+function takeFiles(files: FileList | null | undefined, add: (files: File[]) => void): boolean {
+  if (!files?.length) return false;
+  add([...files]);
+  return true;
+}
+
+/** The write-up editor: Tiptap with the shared extension list, pictures uploaded to the build's media. */
+export function WriteUpEditor({ buildId, value, onChange, error }: WriteUpEditorProps) {
   const id = useId();
   const lastEmitted = useRef<WriteUpDoc>(value);
   const onChangeRef = useRef(onChange);
   const [linkOpen, setLinkOpen] = useState(false);
   const [linkHref, setLinkHref] = useState('');
+  const pictures = usePictureUploads(buildId);
+  const addPictures = useRef(pictures.add);
+  const fileInput = useRef<HTMLInputElement>(null);
+  useEffect(() => {
+    addPictures.current = pictures.add;
+  }, [pictures.add]);
 
   useEffect(() => {
     onChangeRef.current = onChange;
@@ -54,7 +71,12 @@ export function WriteUpEditor({ value, onChange, error }: WriteUpEditorProps) {
     // Rendered only in the browser: the server sends the editor's loading state instead.
     immediatelyRender: false,
     injectCSS: false,
-    editorProps: { attributes: contentAttributes(id, error) },
+    editorProps: {
+      attributes: contentAttributes(id, error),
+      // Pictures dropped or pasted into the text are uploaded, never stored as data in the document.
+      handleDrop: (_view, event) => takeFiles((event as DragEvent).dataTransfer?.files, addPictures.current),
+      handlePaste: (_view, event) => takeFiles(event.clipboardData?.files, addPictures.current),
+    },
     onUpdate: ({ editor: e }) => {
       const doc = e.getJSON() as WriteUpDoc;
       lastEmitted.current = doc;
@@ -90,14 +112,28 @@ export function WriteUpEditor({ value, onChange, error }: WriteUpEditorProps) {
         Write-up
       </p>
       <p id={`${id}-hint`} className="mt-0.5 text-[15px] text-slate">
-        What was done in this session, for readers to follow. Headings, lists, quotes and links; pictures arrive later.
+        What was done in this session, for readers to follow. Headings, lists, quotes, links and pictures (drop or paste them in).
       </p>
       <div
         className={`mt-1.5 border-[1.5px] bg-card ${error ? 'border-oxide-2' : 'border-ink-2'} focus-within:outline-2 focus-within:outline-offset-2 focus-within:outline-ink`}
       >
         {editor ? (
           <>
-            <WriteUpToolbar editor={editor} controls={`${id}-content`} onLink={openLink} />
+            <WriteUpToolbar editor={editor} controls={`${id}-content`} onLink={openLink} onPicture={() => fileInput.current?.click()} />
+            <input
+              ref={fileInput}
+              type="file"
+              accept="image/jpeg,image/png,image/webp,image/avif,image/gif"
+              multiple
+              hidden
+              aria-label="Choose pictures to add"
+              data-testid="picture-input"
+              onChange={(e) => {
+                pictures.add([...(e.target.files ?? [])]);
+                e.target.value = '';
+              }}
+            />
+            <PictureUploads uploads={pictures.uploads} editor={editor} onDismiss={pictures.dismiss} />
             <EditorContent editor={editor} />
           </>
         ) : (

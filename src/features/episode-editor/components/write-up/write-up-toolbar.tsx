@@ -5,6 +5,7 @@ interface ToolbarProps {
   editor: Editor;
   controls: string;
   onLink: () => void;
+  onPicture: () => void;
 }
 
 interface Tool {
@@ -22,7 +23,7 @@ interface Tool {
  * The write-up's formatting buttons as one toolbar: Tab enters and leaves it, arrow keys, Home and
  * End move between buttons (one tab stop), and toggles say whether they are on.
  */
-export function WriteUpToolbar({ editor, controls, onLink }: ToolbarProps) {
+export function WriteUpToolbar({ editor, controls, onLink, onPicture }: ToolbarProps) {
   const state = useEditorState({
     editor,
     selector: ({ editor: e }) => ({
@@ -78,6 +79,7 @@ export function WriteUpToolbar({ editor, controls, onLink }: ToolbarProps) {
     { key: 'numbers', label: 'Numbered list', face: '1. List', pressed: state.orderedList, run: () => chain().toggleOrderedList().run() },
     { key: 'quote', label: 'Quotation', face: '“ ”', pressed: state.blockquote, run: () => chain().toggleBlockquote().run() },
     { key: 'link', label: state.link ? 'Change the link' : 'Add a link', face: 'Link', pressed: state.link, run: onLink },
+    { key: 'picture', label: 'Add a picture', face: 'Picture', run: onPicture },
     { key: 'undo', label: 'Undo', face: '↶', disabled: !state.canUndo, run: () => chain().undo().run() },
     { key: 'redo', label: 'Redo', face: '↷', disabled: !state.canRedo, run: () => chain().redo().run() },
   ];

@@ -1,0 +1,115 @@
+// A creator drags a photo into the write-up: a progress bar, a description, and the published episode
+// shows it with srcset and alt text. Pages go through visit() (axe, 375 px, screenshots).
+import type { Browser, BrowserContext, Page } from 'playwright-core';
+import sharp from 'sharp';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createUser } from '../helpers/factories';
+import { expectOnlyLoopback, launchBrowser, visit, type TrackedPage } from '../helpers/browser';
+import { signInByEmail, TestClient } from '../helpers/http-client';
+import { startTestApp, type TestApp } from '../helpers/test-app';
+import { TEST_DIST_DIR } from '../setup/build-global';
+
+let app: TestApp;
+let browser: Browser;
+let context: BrowserContext;
+let tracked: TrackedPage;
+let client: TestClient;
+
+beforeAll(async () => {
+  app = await startTestApp({ distDir: TEST_DIST_DIR });
+  await createUser(app.deps.db, { handle: 'odile-farrant', display_name: 'Odile Farrant', email: 'odile@example.test' });
+  client = new TestClient(app.baseUrl);
+  await signInByEmail(client, app.deps.db, 'odile@example.test');
+  browser = await launchBrowser();
+  context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+  const [name, value] = client.cookie!.split('=') as [string, string];
+  await context.addCookies([{ name, value, url: app.baseUrl }]);
+  const page = await context.newPage();
+  tracked = { page, context, consoleErrors: [], requests: [], responses: [], close: () => context.close() };
+  page.on('console', (m) => void (m.type() === 'error' && tracked.consoleErrors.push(m.text())));
+  page.on('pageerror', (e) => tracked.consoleErrors.push(e.message));
+  page.on('request', (r) => tracked.requests.push({ url: r.url(), resourceType: r.resourceType() }));
+});
+
+afterAll(async () => {
+  await tracked?.close();
+  await browser?.close();
+  await app?.stop();
+});
+
+async function saved(page: Page) {
+  await page
+    .getByRole('status')
+    .filter({ hasText: /^Saved$/ })
+    .first()
+    .waitFor({ timeout: 15_000 });
+}
+
+describe('pictures in an episode', () => {
+  it('drags a photo into the write-up, shows progress, asks for a description, and publishes it with srcset', async () => {
+    const build = await client.post('/api/builds', {
+      title: '1969 Tallis Marten estate',
+      vehicleKind: 'car',
+      currency: 'EUR',
+      visibility: 'public',
+    });
+    const episode = await client.post(`/api/builds/${build.body.id}/episodes`, { title: 'Sills and a seized door' });
+    const id = episode.body.id as number;
+    const page = await visit(tracked, `${app.baseUrl}/workbench/episodes/${id}/edit`);
+    const writeUp = page.locator('.ProseMirror');
+    await writeUp.click();
+    await page.keyboard.type('The sill came away in pieces. ');
+    await saved(page);
+
+    // A 2400 × 1600 photo, big enough for three sizes; its upload's progress is recorded as it happens.
+    const png = await sharp({ create: { width: 2400, height: 1600, channels: 3, background: { r: 122, g: 96, b: 70 } } })
+      .png()
+      .toBuffer();
+    await page.evaluate(() => {
+      const seen: number[] = [];
+      (window as unknown as { progressSeen: number[] }).progressSeen = seen;
+      new MutationObserver(() => {
+        const bar = document.querySelector('progress');
+        if (bar) seen.push(Number(bar.getAttribute('value') ?? bar.value));
+      }).observe(document.body, { subtree: true, childList: true, attributes: true, attributeFilter: ['value'] });
+    });
+    const dataTransfer = await page.evaluateHandle((b64) => {
+      const bytes = Uint8Array.from(atob(b64), (c) => c.charCodeAt(0));
+      const dt = new DataTransfer();
+      dt.items.add(new File([bytes], 'sill.png', { type: 'image/png' }));
+      return dt;
+    }, png.toString('base64'));
+    // ProseMirror places a drop where it lands: the event carries a point inside the text.
+    const box = (await writeUp.boundingBox())!;
+    await writeUp.dispatchEvent('drop', { dataTransfer, clientX: box.x + 40, clientY: box.y + 20 });
+
+    const describe = page.getByLabel('Describe sill.png');
+    await describe.waitFor({ timeout: 15_000 });
+    const progress = await page.evaluate(() => (window as unknown as { progressSeen: number[] }).progressSeen);
+    expect(progress.length).toBeGreaterThan(0);
+    // Inserting without a description is refused; with one, the picture goes in.
+    await page.getByRole('button', { name: 'Insert picture' }).click();
+    await page.getByText('Describe the picture for people who cannot see it.').waitFor();
+    await describe.fill('The rotten sill laid out on the bench');
+    await page.getByRole('button', { name: 'Insert picture' }).click();
+    await writeUp.locator('img[data-media-id]').waitFor();
+    await saved(page);
+
+    // The sizes are made by the job; the stored HTML is rendered again with them.
+    await app.runJobs();
+    await page.getByRole('button', { name: 'Publish now' }).click();
+    await page.getByText(/Published\. Readers can see it now\./).waitFor();
+
+    const b = await app.deps.db.selectFrom('builds').select('slug').where('id', '=', build.body.id).executeTakeFirstOrThrow();
+    const e = await app.deps.db.selectFrom('episodes').select('slug').where('id', '=', id).executeTakeFirstOrThrow();
+    const reader = await visit(tracked, `${app.baseUrl}/builds/odile-farrant/${b.slug}/episodes/${e.slug}`);
+    const img = reader.getByRole('img', { name: 'The rotten sill laid out on the bench' });
+    expect(await img.getAttribute('srcset')).toMatch(/w320\.webp 320w, .*w960\.webp 960w, .*w1920\.webp 1920w/);
+    expect(await img.getAttribute('width')).toBe('2400');
+    await expect
+      .poll(() => img.evaluate((el) => (el as HTMLImageElement).complete && (el as HTMLImageElement).naturalWidth > 0))
+      .toBe(true);
+    expect(tracked.consoleErrors).toEqual([]);
+    expectOnlyLoopback(tracked);
+  });
+});
