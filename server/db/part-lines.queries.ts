@@ -136,6 +136,7 @@ export function ledgerFilter(q: Partial<LedgerQuery>): RawBuilder<unknown> {
   if (q.supplierId) parts.push(sql`x.supplier_id = ${q.supplierId}`);
   if (q.kind) parts.push(sql`x.kind = ${q.kind}`);
   if (q.status) parts.push(sql`x.status = ${q.status}`);
+  if (q.receipt) parts.push(q.receipt === 'missing' ? sql`x.receipt_media_id is null` : sql`x.receipt_media_id is not null`);
   return sql.join(parts, sql` and `);
 }
 
@@ -165,6 +166,8 @@ export interface LineRow {
   affiliate: boolean;
   open_item_id: number | null;
   open_item_title: string | null;
+  receipt_media_id: number | null;
+  receipt_content_type: string | null;
   net_minor: number;
   tax_minor: number;
   gross_minor: number;
@@ -187,10 +190,11 @@ export async function listLines(
   const sort = SORT_COLUMNS[q.sort ?? 'episode'];
   const dir = q.dir === 'desc' ? 'desc' : 'asc';
   const { rows } = await sql<LineRow>`
-    select x.*, s.name as supplier_name, o.title as open_item_title, count(*) over ()::int as total
+    select x.*, s.name as supplier_name, o.title as open_item_title, rm.content_type as receipt_content_type, count(*) over ()::int as total
       from (${convertedLines(scope)}) x
       left join suppliers s on s.id = x.supplier_id
       left join open_items o on o.id = x.open_item_id
+      left join media rm on rm.id = x.receipt_media_id
      where ${ledgerFilter(q)}
      order by ${sql.raw(`${sort} ${dir} nulls last`)}, x.episode_number, x.position, x.id
      limit ${q.limit ?? 10_000} offset ${q.offset ?? 0}`.execute(db);

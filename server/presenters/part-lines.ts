@@ -31,6 +31,10 @@ export function presentPartLine(r: LineRow): PartLine {
     buyUrl: r.buy_url,
     affiliate: r.affiliate,
     openItem: r.open_item_id !== null && r.open_item_title !== null ? { id: r.open_item_id, title: r.open_item_title } : null,
+    receipt:
+      r.receipt_media_id !== null && r.receipt_content_type !== null
+        ? { id: r.receipt_media_id, contentType: r.receipt_content_type }
+        : null,
     amounts: { netMinor: r.net_minor, taxMinor: r.tax_minor, grossMinor: r.gross_minor },
     buildAmounts:
       r.b_gross === null ? null : { netMinor: r.b_net ?? 0, taxMinor: r.b_tax ?? 0, grossMinor: r.b_gross, avoidedMinor: r.b_avoided },

@@ -53,7 +53,12 @@ export const partLineRoutes = [
     action: 'episode.read',
     params: episodeParams,
     resource: episodeResource,
-    handler: ({ deps, params }) => episodeParts(deps, params.episodeId),
+    handler: async ({ deps, actor, params, resource }) => {
+      const parts = await episodeParts(deps, params.episodeId);
+      // Receipts are the build team's: readers do not even learn that one exists.
+      const team = resource?.kind === 'episode' && actor?.builds.has(resource.buildId) === true;
+      return team ? parts : { ...parts, items: parts.items.map((l) => ({ ...l, receipt: null })) };
+    },
   }),
   defineRoute({
     method: 'post',

@@ -58,6 +58,16 @@ export async function lineValues(trx: Trx, buildId: number, line: PartLineInput,
       .executeTakeFirst();
     if (!o) problems.openItemId = 'not an open item of this build';
   }
+  if (line.receiptMediaId !== null) {
+    const r = await trx
+      .selectFrom('media')
+      .select('id')
+      .where('id', '=', line.receiptMediaId)
+      .where('build_id', '=', buildId)
+      .where('kind', '=', 'receipt')
+      .executeTakeFirst();
+    if (!r) problems.receiptMediaId = 'not a receipt of this build';
+  }
   if (Object.keys(problems).length) throw invalid(problems, prefix);
   return {
     kind: line.kind,
@@ -79,6 +89,7 @@ export async function lineValues(trx: Trx, buildId: number, line: PartLineInput,
     buy_url: line.buyUrl,
     affiliate: line.affiliate,
     open_item_id: line.openItemId,
+    receipt_media_id: line.receiptMediaId,
   };
 }
 
@@ -140,6 +151,7 @@ export async function updatePartLine(db: Db, lineId: number, changes: Partial<Pa
       buyUrl: current.buy_url,
       affiliate: current.affiliate,
       openItemId: current.open_item_id,
+      receiptMediaId: current.receipt_media_id,
       ...changes,
     };
     // A line moved into the build's own currency drops its rate, and out of it needs one.

@@ -306,3 +306,55 @@ describe('pictures in the write-up', () => {
     expect(published.status).toBe(200);
   });
 });
+
+describe('receipts on part lines', () => {
+  it('attaches a receipt to a line, filters the ledger by it, and hides it from readers', async () => {
+    const db = app.deps.db;
+    const e = await db
+      .insertInto('episodes')
+      .values({
+        build_id: buildId,
+        number: 60,
+        slug: 'receipts',
+        title: 'Receipts',
+        status: 'published',
+        published_at: new Date(Date.now() - 60_000),
+        write_up: '{"type":"doc"}',
+      })
+      .returning('id')
+      .executeTakeFirstOrThrow();
+    const currency = (await db.selectFrom('builds').select('currency').where('id', '=', buildId).executeTakeFirstOrThrow()).currency;
+    const line = await owner.post(`/api/episodes/${e.id}/part-lines`, {
+      kind: 'part',
+      description: 'Door seal',
+      currency,
+      unitPriceMinor: 1500,
+    });
+    const other = await owner.post(`/api/episodes/${e.id}/part-lines`, {
+      kind: 'part',
+      description: 'Door pins',
+      currency,
+      unitPriceMinor: 400,
+    });
+    const receipt = await upload(owner, Buffer.from('%PDF-1.4\n%%EOF\n'), 'till-slip.pdf', { kind: 'receipt' });
+    const photo = await upload(
+      owner,
+      await sharp({ create: { width: 5, height: 5, channels: 3, background: '#010203' } })
+        .png()
+        .toBuffer(),
+      'x.png',
+    );
+    const wrong = await owner.patch(`/api/part-lines/${line.body.id}`, { receiptMediaId: photo.body.id });
+    expect(wrong.status).toBe(400);
+    expect(wrong.body.error.fields).toHaveProperty('receiptMediaId');
+    const attached = await owner.patch(`/api/part-lines/${line.body.id}`, { receiptMediaId: receipt.body.id });
+    expect(attached.status).toBe(200);
+    expect(attached.body.receipt).toEqual({ id: receipt.body.id, contentType: 'application/pdf' });
+    const missing = await owner.get(`/api/builds/${buildId}/ledger?receipt=missing&episodeId=${e.id}`);
+    expect(missing.body.items.map((l: { id: number }) => l.id)).toEqual([other.body.id]);
+    const withReceipt = await owner.get(`/api/builds/${buildId}/ledger?receipt=attached&episodeId=${e.id}`);
+    expect(withReceipt.body.items.map((l: { id: number }) => l.id)).toEqual([line.body.id]);
+    const asReader = await follower.get(`/api/episodes/${e.id}/part-lines`);
+    expect(asReader.body.items.every((l: { receipt: unknown }) => l.receipt === null)).toBe(true);
+  });
+});

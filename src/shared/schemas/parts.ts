@@ -72,6 +72,8 @@ const partLineFields = {
   affiliate: z.boolean(),
   /** Lines still needed or on order may point at the open item they wait for. */
   openItemId: z.number().int().positive().nullable(),
+  /** A receipt (image or PDF) uploaded to the build's media as kind "receipt". */
+  receiptMediaId: z.number().int().positive().nullable(),
 };
 
 /** A new line: what the creator typed, with the usual defaults for what they left out. */
@@ -92,6 +94,7 @@ export const partLineInput = z.object({
   buyUrl: partLineFields.buyUrl.default(null),
   affiliate: partLineFields.affiliate.default(false),
   openItemId: partLineFields.openItemId.default(null),
+  receiptMediaId: partLineFields.receiptMediaId.default(null),
 });
 export type PartLineInput = z.infer<typeof partLineInput>;
 export type PartLineInputRaw = z.input<typeof partLineInput>;
@@ -141,6 +144,8 @@ export const partLine = z.object({
   buyUrl: z.string().nullable(),
   affiliate: z.boolean(),
   openItem: z.object({ id: z.number().int(), title: z.string() }).nullable(),
+  /** The receipt's id and type; the file is the build team's alone (GET /api/media/:id/download). */
+  receipt: z.object({ id: z.number().int(), contentType: z.string() }).nullable(),
   /** In the line's own currency, computed by PostgreSQL. */
   amounts,
   /** In the build's currency; null when the line's currency differs and no rate is recorded. */
@@ -223,6 +228,8 @@ export const ledgerQuery = pageQuery.extend({
   supplierId: z.preprocess(blank, z.coerce.number().int().positive().optional()),
   kind: z.preprocess(blank, z.enum(PART_KINDS).optional()),
   status: z.preprocess(blank, z.enum(PART_STATUSES).optional()),
+  /** "missing": lines without a receipt; "attached": lines with one. */
+  receipt: z.preprocess(blank, z.enum(['missing', 'attached']).optional()),
   sort: z.enum(LEDGER_SORTS).default('episode'),
   dir: z.enum(['asc', 'desc']).default('asc'),
 });
