@@ -1,5 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useEffect, useId, useRef, type FocusEvent, type KeyboardEvent } from 'react';
+import { useCallback, useEffect, useId, useRef, type FocusEvent, type KeyboardEvent } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { Button } from '../../../../components/ui/button';
 import { formatTime } from '../../../../shared/chapters';
@@ -56,7 +56,7 @@ export function PartLineEditor({
     defaultValues,
     resolver: zodResolver(partLineFormSchema(ctx.buildCurrency, keepAtSeconds)),
   });
-  const { register, handleSubmit, control, setValue, setError, reset, formState, setFocus } = form;
+  const { register, handleSubmit, control, setValue, setError, reset, formState } = form;
   const values = useWatch({ control }) as PartLineFormValues;
   const { currency, source, status, supplierName, supplierId } = values;
   const foreign = currency.trim().toUpperCase() !== ctx.buildCurrency;
@@ -66,9 +66,10 @@ export function PartLineEditor({
     onDraft(result.ok ? result.input : null);
   }, [values, ctx.buildCurrency, keepAtSeconds, onDraft]);
   useEffect(() => () => onDraft(null), [onDraft]);
+  const focusDescription = useCallback(() => document.getElementById(`${idBase}-description`)?.focus(), [idBase]);
   useEffect(() => {
-    if (mode === 'edit') setFocus('description');
-  }, [mode, setFocus]);
+    if (mode === 'edit') focusDescription();
+  }, [mode, focusDescription]);
 
   const submit = handleSubmit(async (input, event) => {
     void event;
@@ -99,7 +100,7 @@ export function PartLineEditor({
           supplierId: sid,
           supplierName: sname,
         });
-        setFocus('description');
+        focusDescription();
       }
     } catch (err) {
       if (err instanceof ApiError && err.fields) {
@@ -140,7 +141,7 @@ export function PartLineEditor({
       className="grid grid-cols-2 gap-x-3 gap-y-2 sm:grid-cols-4 lg:grid-cols-8"
     >
       <TextCell {...common} field="description" label={label('Description')} className="col-span-2 sm:col-span-4 lg:col-span-3" />
-      <SelectCell {...common} field="kind" label={label('Kind')} options={opts(PART_KINDS, KIND_LABELS)} />
+      <SelectCell {...common} field="kind" value={String(values.kind)} label={label('Kind')} options={opts(PART_KINDS, KIND_LABELS)} />
       <TextCell {...common} field="partNumber" label={label('Part number')} mono />
       <div className="col-span-2 min-w-0 sm:col-span-2 lg:col-span-3">
         <SupplierField
@@ -159,12 +160,14 @@ export function PartLineEditor({
       <SelectCell
         {...common}
         field="systemKey"
+        value={String(values.systemKey)}
         label={label('System')}
         options={[{ value: '', label: 'None' }, ...ctx.systems.map((s) => ({ value: s.key, label: s.name }))]}
       />
       <SelectCell
         {...common}
         field="chapter"
+        value={String(values.chapter)}
         label={label('Chapter')}
         className="lg:col-span-2"
         options={[
@@ -172,10 +175,28 @@ export function PartLineEditor({
           ...ctx.chapters.map((c) => ({ value: String(c.startSeconds), label: `${formatTime(c.startSeconds)} ${c.title}` })),
         ]}
       />
-      <SelectCell {...common} field="source" label={label('Source')} options={opts(PART_SOURCES, SOURCE_LABELS)} />
-      <SelectCell {...common} field="status" label={label('Status')} options={opts(PART_STATUSES, STATUS_LABELS)} />
+      <SelectCell
+        {...common}
+        field="source"
+        value={String(values.source)}
+        label={label('Source')}
+        options={opts(PART_SOURCES, SOURCE_LABELS)}
+      />
+      <SelectCell
+        {...common}
+        field="status"
+        value={String(values.status)}
+        label={label('Status')}
+        options={opts(PART_STATUSES, STATUS_LABELS)}
+      />
       <TextCell {...common} field="quantity" label={label('Quantity')} inputMode="decimal" mono />
-      <SelectCell {...common} field="unit" label={label('Unit')} options={PART_UNITS.map((u) => ({ value: u, label: u }))} />
+      <SelectCell
+        {...common}
+        field="unit"
+        value={String(values.unit)}
+        label={label('Unit')}
+        options={PART_UNITS.map((u) => ({ value: u, label: u }))}
+      />
       <TextCell {...common} field="unitPrice" label={label(`Unit price`)} inputMode="decimal" mono placeholder="0.00" />
       <TextCell {...common} field="currency" label={label('Currency')} mono />
       <TextCell {...common} field="taxRate" label={label('Tax %')} inputMode="decimal" mono />
@@ -198,6 +219,7 @@ export function PartLineEditor({
         <SelectCell
           {...common}
           field="openItemId"
+          value={String(values.openItemId)}
           label={label('Open item')}
           className="col-span-2"
           options={[{ value: '', label: 'None' }, ...ctx.openItems.map((o) => ({ value: String(o.id), label: o.title }))]}

@@ -73,18 +73,21 @@ export function TextCell({
   );
 }
 
+/** Controlled by the watched value, so the DOM always shows what the form holds (after a reset too). */
 export function SelectCell({
   register,
   options,
+  value,
   ...cell
 }: Omit<CellProps, 'children'> & {
   register: UseFormRegister<PartLineFormValues>;
   options: ReadonlyArray<{ value: string; label: string }>;
+  value: string;
 }) {
   return (
     <Cell {...cell}>
       {(a) => (
-        <select {...a} {...register(cell.field)} className={cellInput}>
+        <select {...a} {...register(cell.field)} value={value} className={cellInput}>
           {options.map((o) => (
             <option key={o.value} value={o.value}>
               {o.label}
