@@ -19,6 +19,7 @@ import { SignInPage } from '../routes/sign-in';
 import { SignInLinkPage } from '../routes/sign-in-link';
 import { workbenchLoader, WorkbenchPage } from '../routes/workbench';
 import { workbenchBuildLoader, WorkbenchBuildPage } from '../routes/workbench-build';
+import { buildLedgerLoader, BuildLedgerPage } from '../routes/workbench-build-ledger';
 import { NewBuildPage } from '../routes/workbench-build-new';
 import { buildSettingsLoader, BuildSettingsPage } from '../routes/workbench-build-settings';
 import { RouteErrorBoundary } from './error-boundary';
@@ -90,6 +91,12 @@ export function createRoutes({ queryClient, api }: RouteDeps): RouteObject[] {
           id: 'workbench-build-settings',
           loader: buildSettingsLoader(deps),
           Component: BuildSettingsPage,
+        },
+        {
+          path: 'workbench/builds/:buildId/ledger',
+          id: 'workbench-build-ledger',
+          loader: buildLedgerLoader(deps),
+          Component: BuildLedgerPage,
         },
         // A lazy module (the editor and Tiptap load only here); it reads its data through hooks, so the
         // loader only sends visitors to sign in.

@@ -7,9 +7,9 @@ import type { PartLine, PartLineInput } from '../../../../shared/schemas/parts';
 import { useEpisodeParts } from '../../api/get-episode-parts';
 import { useCreatePartLine, useDeletePartLine, useUpdatePartLine } from '../../api/part-line-mutations';
 import { changedInput, emptyPartLineValues, lineToInput, lineToValues, totalsLineOf } from '../../lib/part-line-form';
-import { EpisodeTotals } from './episode-totals';
 import { PartLineEditor, type PartsContext } from './part-line-editor';
 import { PartsTable } from './parts-table';
+import { LinesTotals } from '../lines-totals';
 
 /**
  * The episode's parts list in the editor. Each line saves on its own (not with the autosave):
@@ -134,7 +134,7 @@ export function PartsPanel({ episodeId, ctx }: { episodeId: number; ctx: PartsCo
               onSubmit={(input) => create.mutateAsync(input)}
             />
           </div>
-          {totals ? <EpisodeTotals totals={totals} live={draft !== null} /> : null}
+          {totals ? <LinesTotals title="Totals of this episode" totals={totals} live={draft !== null} /> : null}
         </>
       )}
     </section>

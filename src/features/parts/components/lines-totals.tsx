@@ -1,8 +1,13 @@
-import { formatMinor } from '../../../../shared/money';
-import type { PartTotals } from '../../../../shared/schemas/parts';
+import { useId } from 'react';
+import { formatMinor } from '../../../shared/money';
+import type { PartTotals } from '../../../shared/schemas/parts';
 
-/** The episode's totals in the build's currency; `live` when a row being typed is counted in. */
-export function EpisodeTotals({ totals, live }: { totals: PartTotals; live: boolean }) {
+/**
+ * Totals of a set of part lines in the build's currency (an episode's, or the ledger's filter);
+ * `live` when a row still being typed is counted in.
+ */
+export function LinesTotals({ totals, title, live = false }: { totals: PartTotals; title: string; live?: boolean }) {
+  const headingId = useId();
   const money = (m: number) => formatMinor(m, totals.currency);
   const cells: Array<{ label: string; value: string; tone?: string }> = [
     { label: 'Spent, net', value: money(totals.spent.netMinor) },
@@ -15,10 +20,10 @@ export function EpisodeTotals({ totals, live }: { totals: PartTotals; live: bool
   ];
   return (
     <div className="mt-4 border border-rule bg-card">
-      <h3 id="episode-totals-heading" className="sr-only">
-        Totals of this episode
+      <h3 id={headingId} className="sr-only">
+        {title}
       </h3>
-      <dl aria-labelledby="episode-totals-heading" aria-live="polite" className="grid grid-cols-2 sm:grid-cols-4 lg:grid-cols-7">
+      <dl aria-labelledby={headingId} aria-live="polite" className="grid grid-cols-2 sm:grid-cols-4 lg:grid-cols-7">
         {cells.map((c) => (
           <div key={c.label} className="border-b border-rule px-3 py-2 sm:border-r">
             <dt className="font-condensed text-xs font-semibold tracking-label text-slate uppercase">{c.label}</dt>
