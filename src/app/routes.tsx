@@ -5,6 +5,7 @@ import type { ApiClient } from '../lib/api-client';
 import { AccountBuildsPage } from '../routes/account-builds';
 import { AccountSettingsPage } from '../routes/account-settings';
 import { adminAccountsLoader, AdminAccountsPage } from '../routes/admin-accounts';
+import { adminSuppliersLoader, AdminSuppliersPage } from '../routes/admin-suppliers';
 import { buildPageLoader, BuildPage } from '../routes/build-page';
 import { buildsDirectoryLoader, BuildsDirectoryPage } from '../routes/builds-directory';
 import { buildTeamLoader, BuildTeamPage } from '../routes/build-team';
@@ -107,6 +108,7 @@ export function createRoutes({ queryClient, api }: RouteDeps): RouteObject[] {
           lazy: () => import('../routes/episode-editor'),
         },
         { path: 'admin/accounts', id: 'admin-accounts', loader: adminAccountsLoader(deps), Component: AdminAccountsPage },
+        { path: 'admin/suppliers', id: 'admin-suppliers', loader: adminSuppliersLoader(deps), Component: AdminSuppliersPage },
         { path: '*', id: NOT_FOUND_ROUTE_ID, Component: NotFound },
       ],
     },
