@@ -131,8 +131,14 @@ function LedgerLines({
   return (
     <div aria-busy={isPlaceholderData || undefined}>
       <p className="mb-3 text-[15px] text-slate" role="status">
-        {data.total === 1 ? 'One line' : `${data.total} lines`}
-        {filtered ? ' match the filter' : ''}; {isPlaceholderData ? 'loading…' : `page ${data.page} of ${totalPages}.`}
+        {filtered
+          ? data.total === 1
+            ? 'One line matches the filter'
+            : `${data.total} lines match the filter`
+          : data.total === 1
+            ? 'One line'
+            : `${data.total} lines`}
+        ; {isPlaceholderData ? 'loading…' : `page ${data.page} of ${totalPages}.`}
       </p>
       <LedgerTable
         lines={data.items}

@@ -26,7 +26,7 @@ export default function SpendChartsDrawing({ totals }: { totals: BuildTotals }) 
       <div>
         <p className="label-condensed mb-1">By system, against budget</p>
         <ResponsiveContainer width="100%" height={220}>
-          <BarChart data={systems} margin={{ top: 8, right: 8, bottom: 0, left: 8 }}>
+          <BarChart accessibilityLayer={false} data={systems} margin={{ top: 8, right: 8, bottom: 0, left: 8 }}>
             <CartesianGrid stroke={RULE} vertical={false} />
             <XAxis dataKey="name" tick={font} interval={0} angle={-20} textAnchor="end" height={48} />
             <YAxis tick={font} tickFormatter={tick} width={70} />
@@ -41,7 +41,7 @@ export default function SpendChartsDrawing({ totals }: { totals: BuildTotals }) 
       <div>
         <p className="label-condensed mb-1">Spend to date, episode by episode</p>
         <ResponsiveContainer width="100%" height={220}>
-          <LineChart data={episodes} margin={{ top: 8, right: 8, bottom: 0, left: 8 }}>
+          <LineChart accessibilityLayer={false} data={episodes} margin={{ top: 8, right: 8, bottom: 0, left: 8 }}>
             <CartesianGrid stroke={RULE} vertical={false} />
             <XAxis dataKey="name" tick={font} />
             <YAxis tick={font} tickFormatter={tick} width={70} domain={[0, (max: number) => Math.max(max, budget ?? 0)]} />

@@ -157,6 +157,8 @@ export function valuesToInput(v: PartLineFormValues, buildCurrency: string, keep
   if (bp === null || bp < 0n || bp > 10_000n) errors.taxRate = 'a percent from 0 to 100, e.g. 20';
   const avoided = v.avoidedCost.trim() === '' ? null : decimalToMinor(v.avoidedCost, currency);
   if (v.avoidedCost.trim() !== '' && (avoided === null || avoided < 0)) errors.avoidedCost = `an amount in ${currency}`;
+  // A typed name that was never picked would be dropped without a word: ask for the choice.
+  if (v.supplierName.trim() !== '' && v.supplierId === '') errors.supplierName = 'pick a supplier from the list, or “Create supplier …”';
   const raw = {
     kind: v.kind,
     description: v.description,

@@ -36,8 +36,10 @@ export function SupplierField({ buildId, label, name, supplierId, onChange, erro
   const q = useDebounced(name.trim(), 150);
   const { data } = useSuppliers(q, buildId, open);
   const create = useCreateSupplier();
-  const items = data?.items ?? [];
-  const exact = items.some((s) => s.name.toLowerCase() === name.trim().toLowerCase());
+  // Only names that contain what is typed now: an answer for an older (debounced) query never offers a stale pick.
+  const typed = name.trim().toLowerCase();
+  const items = (data?.items ?? []).filter((s) => s.name.toLowerCase().includes(typed));
+  const exact = items.some((s) => s.name.toLowerCase() === typed);
   const options: Option[] = [
     ...items.slice(0, 8).map((supplier): Option => ({ kind: 'supplier', supplier })),
     ...(name.trim() && !exact ? [{ kind: 'create', name: name.trim() } as const] : []),
@@ -101,7 +103,7 @@ export function SupplierField({ buildId, label, name, supplierId, onChange, erro
         onKeyDown={onKeyDown}
         onBlur={() => {
           setOpen(false);
-          const match = items.find((s) => s.name.toLowerCase() === name.trim().toLowerCase());
+          const match = items.find((s) => s.name.toLowerCase() === typed);
           if (!supplierId && match) onChange({ supplierId: String(match.id), supplierName: match.name });
         }}
       />

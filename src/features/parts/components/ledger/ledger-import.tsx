@@ -53,7 +53,7 @@ export function LedgerImport({ buildId }: { buildId: number }) {
       {step.at !== 'preview' ? (
         <div>
           <label htmlFor={`${id}-file`} className="block font-semibold text-ink">
-            Import CSV
+            CSV file to import
           </label>
           <p id={`${id}-hint`} className="mt-0.5 text-[15px] text-slate">
             The same columns as the export. Nothing is saved until you have seen the check of every row.
