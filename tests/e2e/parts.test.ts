@@ -69,7 +69,7 @@ async function typeLine(page: Page, line: Line) {
     await page
       .getByRole('combobox', { name: 'Supplier' })
       .and(page.locator(`[value="${line.supplier}"]`))
-      .waitFor();
+      .waitFor({ timeout: 10_000 });
   }
   await k.press('Tab'); // system
   await k.type('Brakes');
@@ -134,7 +134,7 @@ describe('parts', () => {
 
     // The ledger before any line: nothing spent.
     let ledger = await visit(tracked, `${app.baseUrl}/workbench/builds/${buildId}/ledger`);
-    await ledger.getByText('No part lines yet.').waitFor();
+    await ledger.getByText('No part lines yet.').waitFor({ timeout: 10_000 });
     expect(await figure(ledger, 'summary', 'Spent')).toBe('€0.00');
 
     const page = await visit(tracked, `${app.baseUrl}/workbench/episodes/${id}/edit`);
@@ -184,9 +184,9 @@ describe('parts', () => {
     ledger = await visit(tracked, `${app.baseUrl}/workbench/builds/${buildId}/ledger`);
     expect(await figure(ledger, 'summary', 'Spent')).toBe('€41.85');
     expect(await figure(ledger, 'summary', 'On order')).toBe('€18.50');
-    await ledger.getByText('5 lines; page 1 of 1.').waitFor();
+    await ledger.getByText('5 lines; page 1 of 1.').waitFor({ timeout: 10_000 });
     ledger = await visit(tracked, `${app.baseUrl}/workbench/builds/${buildId}/ledger?status=on-order&sort=gross&dir=desc`);
-    await ledger.getByText('One line matches the filter; page 1 of 1.').waitFor();
+    await ledger.getByText('One line matches the filter; page 1 of 1.').waitFor({ timeout: 10_000 });
     expect(await figure(ledger, 'lines', 'On order')).toBe('€18.50');
     expect(await figure(ledger, 'lines', 'Spent')).toBe('€0.00');
     const download = ledger.waitForEvent('download');
@@ -198,5 +198,5 @@ describe('parts', () => {
 
     expect(tracked.consoleErrors).toEqual([]);
     expectOnlyLoopback(tracked);
-  });
+  }, 180_000);
 });

@@ -20,7 +20,7 @@ export function SpendCharts({ totals }: { totals: BuildTotals }) {
   const systems = totals.bySystem.filter((s) => s.spentMinor || s.committedMinor || s.plannedMinor || s.budgetMinor);
   return (
     <div className="space-y-6">
-      <div aria-hidden="true" className="min-h-[260px] border border-rule bg-card p-3">
+      <div aria-hidden="true" className="min-h-[260px] overflow-hidden border border-rule bg-card p-3">
         {mounted ? (
           <Suspense fallback={null}>
             <SpendChartsDrawing totals={totals} />

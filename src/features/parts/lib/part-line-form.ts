@@ -157,6 +157,8 @@ export function valuesToInput(v: PartLineFormValues, buildCurrency: string, keep
   if (bp === null || bp < 0n || bp > 10_000n) errors.taxRate = 'a percent from 0 to 100, e.g. 20';
   const avoided = v.avoidedCost.trim() === '' ? null : decimalToMinor(v.avoidedCost, currency);
   if (v.avoidedCost.trim() !== '' && (avoided === null || avoided < 0)) errors.avoidedCost = `an amount in ${currency}`;
+  // Said at once with the other problems, not only once the rest parses.
+  if (currency !== buildCurrency && v.fxRate.trim() === '') errors.fxRate = `needs the rate you used to ${buildCurrency}`;
   // A typed name that was never picked would be dropped without a word: ask for the choice.
   if (v.supplierName.trim() !== '' && v.supplierId === '') errors.supplierName = 'pick a supplier from the list, or “Create supplier …”';
   const raw = {

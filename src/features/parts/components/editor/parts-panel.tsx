@@ -43,9 +43,31 @@ export function PartsPanel({ episodeId, ctx }: { episodeId: number; ctx: PartsCo
     return computeTotals(lines.map(totalsLineOf), ctx.buildCurrency);
   }, [data, draft, ctx.buildCurrency]);
 
-  const deleteLine = (line: PartLine) => {
-    remove.mutate(line.id, { onSuccess: () => setDeleted(line) });
-  };
+  const { mutate: removeLine } = remove;
+  const deleteLine = useCallback((line: PartLine) => removeLine(line.id, { onSuccess: () => setDeleted(line) }), [removeLine]);
+  const editLine = useCallback((line: PartLine) => setEditingId(line.id), []);
+  const stopEditing = useCallback(() => setEditingId(null), []);
+  const { mutateAsync: updateLine } = update;
+  const renderEditor = useCallback(
+    (line: PartLine, index: number) => (
+      <PartLineEditor
+        key={line.id}
+        ctx={ctx}
+        mode="edit"
+        rowLabel={`line ${index + 1}`}
+        defaultValues={lineToValues(line, chapterStarts)}
+        keepAtSeconds={line.atSeconds}
+        onDraft={onEditDraft}
+        onCancel={stopEditing}
+        onSubmit={async (input) => {
+          const patch = changedInput(lineToInput(line), input);
+          if (Object.keys(patch).length) await updateLine({ id: line.id, ...patch });
+          setEditingId(null);
+        }}
+      />
+    ),
+    [ctx, chapterStarts, onEditDraft, stopEditing, updateLine],
+  );
   const undo = () => {
     if (!deleted) return;
     create.mutate({ ...lineToInput(deleted), position: deleted.position }, { onSuccess: () => setDeleted(null) });
@@ -89,25 +111,9 @@ export function PartsPanel({ episodeId, ctx }: { episodeId: number; ctx: PartsCo
                 systemName={systemName}
                 editingId={editingId}
                 busyId={remove.isPending ? (remove.variables ?? null) : null}
-                onEdit={(line) => setEditingId(line.id)}
+                onEdit={editLine}
                 onDelete={deleteLine}
-                renderEditor={(line, index) => (
-                  <PartLineEditor
-                    key={line.id}
-                    ctx={ctx}
-                    mode="edit"
-                    rowLabel={`line ${index + 1}`}
-                    defaultValues={lineToValues(line, chapterStarts)}
-                    keepAtSeconds={line.atSeconds}
-                    onDraft={onEditDraft}
-                    onCancel={() => setEditingId(null)}
-                    onSubmit={async (input) => {
-                      const patch = changedInput(lineToInput(line), input);
-                      if (Object.keys(patch).length) await update.mutateAsync({ id: line.id, ...patch });
-                      setEditingId(null);
-                    }}
-                  />
-                )}
+                renderEditor={renderEditor}
               />
             </div>
           )}

@@ -1,5 +1,5 @@
 import { createColumnHelper, flexRender, getCoreRowModel, useReactTable } from '@tanstack/react-table';
-import { Fragment, useMemo } from 'react';
+import { Fragment, memo, useMemo } from 'react';
 import { Plate } from '../../../../components/ui/plate';
 import { formatMinor } from '../../../../shared/money';
 import type { PartLine } from '../../../../shared/schemas/parts';
@@ -19,8 +19,16 @@ interface PartsTableProps {
   busyId: number | null;
 }
 
-/** The saved lines as text (light DOM); only the line being edited has inputs. */
-export function PartsTable({ lines, systemName, editingId, renderEditor, onEdit, onDelete, busyId }: PartsTableProps) {
+/** The saved lines as text (light DOM); only the line being edited has inputs. Memoised: typing in a row must not re-render the rest. */
+export const PartsTable = memo(function PartsTable({
+  lines,
+  systemName,
+  editingId,
+  renderEditor,
+  onEdit,
+  onDelete,
+  busyId,
+}: PartsTableProps) {
   const columns = useMemo(
     () => [
       col.accessor('description', {
@@ -71,8 +79,9 @@ export function PartsTable({ lines, systemName, editingId, renderEditor, onEdit,
   const table = useReactTable({ data: lines, columns, getCoreRowModel: getCoreRowModel(), getRowId: (l) => String(l.id) });
   const span = columns.length + 1;
 
+  // relative: the sr-only (absolute) labels inside must scroll with the table, not widen the page.
   return (
-    <div className="overflow-x-auto">
+    <div className="relative overflow-x-auto">
       <table className="w-full min-w-[40rem] border-collapse text-[15px]">
         <caption className="sr-only">Part lines of this episode</caption>
         <thead>
@@ -137,7 +146,7 @@ export function PartsTable({ lines, systemName, editingId, renderEditor, onEdit,
       </table>
     </div>
   );
-}
+});
 
 const actionClass =
   'min-h-11 px-2 font-condensed text-sm font-semibold tracking-label uppercase underline underline-offset-2 disabled:opacity-60';

@@ -118,7 +118,7 @@ function Preview({
           Nothing was saved: some rows have problems (listed below).
         </Notice>
       ) : null}
-      <div className="mt-3 max-h-[28rem] overflow-auto">
+      <div className="relative mt-3 max-h-[28rem] overflow-auto">
         <table className="w-full min-w-[32rem] border-collapse text-[15px]">
           <caption className="sr-only">{bad.length ? 'Rows with problems' : 'Rows to import'}</caption>
           <thead>

@@ -91,8 +91,9 @@ export function LedgerTable({ lines, query, currency, systemName, sortHref, edit
     getRowId: (l) => String(l.id),
   });
 
+  // relative: the sr-only (absolute) labels inside must scroll with the table, not widen the page.
   return (
-    <div className="overflow-x-auto">
+    <div className="relative overflow-x-auto">
       <table className="w-full min-w-[48rem] border-collapse text-[15px]">
         <caption className="sr-only">Part lines of the build, sorted by {query.sort}</caption>
         <thead>
