@@ -5,6 +5,7 @@ import type { ApiClient } from '../lib/api-client';
 import { AccountBuildsPage } from '../routes/account-builds';
 import { AccountSettingsPage } from '../routes/account-settings';
 import { adminAccountsLoader, AdminAccountsPage } from '../routes/admin-accounts';
+import { adminSuppliersLoader, AdminSuppliersPage } from '../routes/admin-suppliers';
 import { buildPageLoader, BuildPage } from '../routes/build-page';
 import { buildsDirectoryLoader, BuildsDirectoryPage } from '../routes/builds-directory';
 import { buildTeamLoader, BuildTeamPage } from '../routes/build-team';
@@ -20,6 +21,7 @@ import { SignInLinkPage } from '../routes/sign-in-link';
 import { workbenchLoader, WorkbenchPage } from '../routes/workbench';
 import { WorkshopPage } from '../routes/workshop';
 import { workbenchBuildLoader, WorkbenchBuildPage } from '../routes/workbench-build';
+import { buildLedgerLoader, BuildLedgerPage } from '../routes/workbench-build-ledger';
 import { NewBuildPage } from '../routes/workbench-build-new';
 import { buildSettingsLoader, BuildSettingsPage } from '../routes/workbench-build-settings';
 import { RouteErrorBoundary } from './error-boundary';
@@ -92,6 +94,12 @@ export function createRoutes({ queryClient, api }: RouteDeps): RouteObject[] {
           loader: buildSettingsLoader(deps),
           Component: BuildSettingsPage,
         },
+        {
+          path: 'workbench/builds/:buildId/ledger',
+          id: 'workbench-build-ledger',
+          loader: buildLedgerLoader(deps),
+          Component: BuildLedgerPage,
+        },
         // A lazy module (the editor and Tiptap load only here); it reads its data through hooks, so the
         // loader only sends visitors to sign in.
         {
@@ -102,6 +110,7 @@ export function createRoutes({ queryClient, api }: RouteDeps): RouteObject[] {
         },
         { path: 'admin/accounts', id: 'admin-accounts', loader: adminAccountsLoader(deps), Component: AdminAccountsPage },
         { path: 'workshop', id: 'workshop', Component: WorkshopPage },
+        { path: 'admin/suppliers', id: 'admin-suppliers', loader: adminSuppliersLoader(deps), Component: AdminSuppliersPage },
         { path: '*', id: NOT_FOUND_ROUTE_ID, Component: NotFound },
       ],
     },

@@ -52,7 +52,7 @@ export function accountMenuItems(account: Account): AccountMenuItem[] {
     { label: 'Account settings', to: accountPaths.settings() },
   ];
   if (account.builds.some((b) => b.role === 'owner')) items.push({ label: 'Build teams', to: accountPaths.builds() });
-  if (account.isAdmin) items.push({ label: 'Accounts', to: adminPaths.accounts() });
+  if (account.isAdmin) items.push({ label: 'Accounts', to: adminPaths.accounts() }, { label: 'Suppliers', to: adminPaths.suppliers() });
   return items;
 }
 

@@ -1,10 +1,15 @@
+import { useMemo } from 'react';
 import { useParams } from 'react-router';
 import { Button } from '../components/ui/button';
 import { StateMessage } from '../components/ui/state-message';
 import { useEditorBuild } from '../features/episode-editor/api/get-build';
 import { useEditorEpisode } from '../features/episode-editor/api/get-episode';
+import { useOpenItems } from '../features/episode-editor/api/get-open-items';
 import { EpisodeEditor } from '../features/episode-editor/components/episode-editor';
+import { PartsPanel } from '../features/parts/components/editor/parts-panel';
 import { ApiError } from '../lib/api-client';
+import type { Build } from '../shared/schemas/builds';
+import type { Episode } from '../shared/schemas/episodes';
 import { idParam } from '../shared/schemas/accounts';
 import { NotFound } from './not-found';
 
@@ -71,5 +76,28 @@ function EditorScreen({ episodeId }: { episodeId: number }) {
     );
   }
   // Keyed by episode, so moving to another episode starts a fresh autosave.
-  return <EpisodeEditor key={episode.id} episode={episode} build={build} />;
+  return (
+    <EpisodeEditor
+      key={episode.id}
+      episode={episode}
+      build={build}
+      parts={build ? <EditorParts episode={episode} build={build} /> : null}
+    />
+  );
+}
+
+/** The parts feature inside the editor: the build's systems and currency, the episode's saved chapters, open items. */
+function EditorParts({ episode, build }: { episode: Episode; build: Build }) {
+  const { data: openItems } = useOpenItems(build.id, episode.id);
+  const ctx = useMemo(
+    () => ({
+      buildId: build.id,
+      buildCurrency: build.currency,
+      systems: build.systems,
+      chapters: episode.chapters,
+      openItems: (openItems?.items ?? []).filter((o) => o.closedIn === null),
+    }),
+    [build, episode.chapters, openItems],
+  );
+  return <PartsPanel episodeId={episode.id} ctx={ctx} />;
 }

@@ -1,5 +1,6 @@
 import { useMemo } from 'react';
 import { Link, useNavigate } from 'react-router';
+import { ButtonLink } from '../components/ui/button';
 import { Notice } from '../components/ui/notice';
 import { PageHeading } from '../components/ui/page-heading';
 import { buildMembersOptions, useBuildMembers } from '../features/accounts/api/get-build-members';
@@ -46,6 +47,10 @@ function SettingsScreen({ build }: { build: Build }) {
           </>
         )}
       </PageHeading>
+      <nav aria-label="Build" className="mt-5 flex flex-wrap gap-3">
+        <ButtonLink to={workbenchPaths.buildLedger(build.id)}>Ledger</ButtonLink>
+        <ButtonLink to={accountPaths.team(build.id)}>Build team</ButtonLink>
+      </nav>
       <div className="mt-8 space-y-12">{owner ? <OwnerSettings build={build} /> : <BuildSettingsSummary build={build} />}</div>
     </>
   );

@@ -48,6 +48,7 @@ function BuildScreen({ build }: { build: Build }) {
         </span>
       </div>
       <nav aria-label="Build" className="mt-5 flex flex-wrap gap-3">
+        <ButtonLink to={workbenchPaths.buildLedger(build.id)}>Ledger</ButtonLink>
         <ButtonLink to={workbenchPaths.buildSettings(build.id)}>Build settings</ButtonLink>
         <ButtonLink to={accountPaths.team(build.id)}>Build team</ButtonLink>
       </nav>

@@ -7,4 +7,5 @@ export const adminPaths = {
     const search = params.toString();
     return search ? `/admin/accounts?${search}` : '/admin/accounts';
   },
+  suppliers: (q = '') => (q ? `/admin/suppliers?${new URLSearchParams({ q }).toString()}` : '/admin/suppliers'),
 };

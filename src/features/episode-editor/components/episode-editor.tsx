@@ -1,4 +1,4 @@
-import { useEffect, useMemo } from 'react';
+import { useEffect, useMemo, type ReactNode } from 'react';
 import { Link } from 'react-router';
 import { paths } from '../../../shared/paths';
 import { DEFAULT_VIDEO_LINK_PATTERN, type Build } from '../../../shared/schemas/builds';
@@ -25,6 +25,8 @@ interface EpisodeEditorProps {
   episode: Episode;
   /** The episode's build; the editor works without it (no systems, the default link pattern). */
   build: Build | undefined;
+  /** The parts panel, composed by the route (another feature's), shown full width under the rest. */
+  parts?: ReactNode;
 }
 
 /** What each field's input would send, or why it cannot be sent yet; the server's 400 messages win. */
@@ -38,8 +40,8 @@ function fieldErrors(draft: EditorDraft, rejected: Partial<Record<DraftField, st
   return { ...out, ...rejected };
 }
 
-/** The episode editor: fields, write-up, chapters, figures, open items, publishing, with autosave throughout. */
-export function EpisodeEditor({ episode, build }: EpisodeEditorProps) {
+/** The episode editor: fields, write-up, chapters, parts, figures, open items, publishing, with autosave throughout. */
+export function EpisodeEditor({ episode, build, parts }: EpisodeEditorProps) {
   const autosave = useAutosave(episode);
   const { draft, change, snapshot, observe } = autosave;
   const { blocker, asking } = useLeaveWarning(autosave.hasUnsaved, autosave.saveNow);
@@ -131,6 +133,7 @@ export function EpisodeEditor({ episode, build }: EpisodeEditorProps) {
           <OpenItemsPanel buildId={server.buildId} episodeId={server.id} />
         </aside>
       </div>
+      {parts ? <div className="mt-10 min-w-0">{parts}</div> : null}
       <LeaveDialog blocker={blocker} open={asking} />
     </article>
   );

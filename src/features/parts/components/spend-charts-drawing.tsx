@@ -22,7 +22,7 @@ export default function SpendChartsDrawing({ totals }: { totals: BuildTotals }) 
   const budget = major(totals.budgetMinor);
   const font = { fontFamily: 'Barlow, sans-serif', fontSize: 12, fill: SLATE };
   return (
-    <div className="grid grid-cols-1 gap-4 lg:grid-cols-2">
+    <div className="grid grid-cols-1 gap-4 lg:grid-cols-2 [&>*]:min-w-0">
       <div>
         <p className="label-condensed mb-1">By system, against budget</p>
         <ResponsiveContainer width="100%" height={220}>

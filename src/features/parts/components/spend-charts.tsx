@@ -21,7 +21,7 @@ export function SpendCharts({ totals }: { totals: BuildTotals }) {
   return (
     <div className="space-y-6">
       {/* Inert as well as hidden: the figures are in the tables below, and nothing in a drawing takes focus. */}
-      <div aria-hidden="true" inert className="min-h-[260px] border border-rule bg-card p-3">
+      <div aria-hidden="true" inert className="min-h-[260px] overflow-hidden border border-rule bg-card p-3">
         {mounted ? (
           <Suspense fallback={null}>
             <SpendChartsDrawing totals={totals} />
