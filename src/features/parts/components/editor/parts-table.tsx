@@ -4,6 +4,7 @@ import { Plate } from '../../../../components/ui/plate';
 import { formatMinor } from '../../../../shared/money';
 import type { PartLine } from '../../../../shared/schemas/parts';
 import { SOURCE_LABELS, STATUS_LABELS, STATUS_TONE } from '../../lib/labels';
+import { ReceiptControl } from './receipt-control';
 
 const col = createColumnHelper<PartLine>();
 const th = 'py-2 pr-3 font-condensed text-[13px] font-semibold tracking-[0.1em] text-slate uppercase';
@@ -118,6 +119,7 @@ export const PartsTable = memo(function PartsTable({
                     </td>
                   ))}
                   <td className="py-1 text-right whitespace-nowrap">
+                    <ReceiptControl line={row.original} />
                     <button type="button" className={actionClass} onClick={() => onEdit(row.original)}>
                       Edit
                       <span className="sr-only">

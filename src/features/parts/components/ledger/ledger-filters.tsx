@@ -15,7 +15,7 @@ export interface LedgerFilterOptions {
  * (so a filtered ledger can be bookmarked and works without JavaScript). Sorting stays as it was.
  */
 export function LedgerFilters({ query, options, resetHref }: { query: LedgerQuery; options: LedgerFilterOptions; resetHref: string }) {
-  const filtered = Boolean(query.episodeId || query.systemKey || query.supplierId || query.kind || query.status);
+  const filtered = Boolean(query.episodeId || query.systemKey || query.supplierId || query.kind || query.status || query.receipt);
   return (
     <Form
       method="get"
@@ -65,6 +65,11 @@ export function LedgerFilters({ query, options, resetHref }: { query: LedgerQuer
             {STATUS_LABELS[s]}
           </option>
         ))}
+      </SelectField>
+      <SelectField key={`r${query.receipt ?? ''}`} label="Receipt" name="receipt" defaultValue={query.receipt ?? ''}>
+        <option value="">With or without</option>
+        <option value="missing">Lines without a receipt</option>
+        <option value="attached">Lines with a receipt</option>
       </SelectField>
       {query.sort !== 'episode' ? <input type="hidden" name="sort" value={query.sort} /> : null}
       {query.dir !== 'asc' ? <input type="hidden" name="dir" value={query.dir} /> : null}
