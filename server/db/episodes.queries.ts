@@ -30,6 +30,14 @@ export async function listLatestEpisodes(db: Db, { limit, offset, ownerId }: { l
         'b.vehicle_year',
         'u.handle',
         'u.display_name',
+        // The cover: the episode's chosen one, else the first picture of its write-up.
+        sql<
+          string | null
+        >`(select m.id || '/' || m.sha256 || '|' || coalesce(m.variants -> 1 ->> 'key', m.variants -> 0 ->> 'key', m.object_key)
+            from media m
+           where m.id = coalesce(e.cover_media_id,
+                   (jsonb_path_query_first(e.write_up, 'strict $.** ? (@.type == "mediaImage").attrs.mediaId'))::text::bigint)
+             and m.kind = 'photo' and m.build_id = e.build_id)`.as('cover'),
       ])
       .orderBy('e.published_at', 'desc')
       .orderBy('e.id', 'desc')

@@ -4,6 +4,13 @@ import type { listLatestEpisodes } from '../db/episodes.queries';
 
 type LatestRow = Awaited<ReturnType<typeof listLatestEpisodes>>['rows'][number];
 
+/** `id/sha|key` from the query → the picture's address at its 960 px size (or the largest there is). */
+function coverUrl(cover: string | null): string | null {
+  if (!cover) return null;
+  const [ref, key] = cover.split('|');
+  return `/files/${ref}/${key!.split('/').pop()}`;
+}
+
 /** Maps a joined episode row to the API's list item. */
 export function presentEpisodeListItem(row: LatestRow): EpisodeListItem {
   return {
@@ -13,7 +20,7 @@ export function presentEpisodeListItem(row: LatestRow): EpisodeListItem {
     title: row.title,
     summary: row.summary,
     publishedAt: (row.published_at ?? new Date(0)).toISOString(),
-    coverUrl: null,
+    coverUrl: coverUrl(row.cover),
     build: {
       id: row.build_id,
       slug: row.build_slug,

@@ -304,6 +304,11 @@ describe('pictures in the write-up', () => {
     expect(html).toContain('width="1000" height="500"');
     const published = await owner.post(`/api/episodes/${e.id}/publish`, { version: withAlt.body.version });
     expect(published.status).toBe(200);
+    // The first picture of the write-up is the episode's cover on the front page, at its 960 px size.
+    const latest = await follower.get('/api/episodes');
+    const card = latest.body.items.find((i: { id: number }) => i.id === e.id);
+    expect(card.coverUrl).toMatch(/^\/files\/\d+\/[0-9a-f]{64}\/w960\.webp$/);
+    expect((await fetch(`${app.baseUrl}${card.coverUrl}`)).status).toBe(200);
   });
 });
 
