@@ -1,4 +1,4 @@
-import type { Browser, BrowserContext, Page } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createUser } from '../helpers/factories';
 import { expectOnlyLoopback, launchBrowser, openPage, visit, type TrackedPage } from '../helpers/browser';
@@ -8,7 +8,6 @@ import { TEST_DIST_DIR } from '../setup/build-global';
 
 let app: TestApp;
 let browser: Browser;
-let context: BrowserContext;
 let creator: TrackedPage;
 let reader: TrackedPage;
 let client: TestClient;
@@ -19,14 +18,7 @@ beforeAll(async () => {
   client = new TestClient(app.baseUrl);
   await signInByEmail(client, app.deps.db, 'ida@example.test');
   browser = await launchBrowser();
-  context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-  const [name, value] = client.cookie!.split('=') as [string, string];
-  await context.addCookies([{ name, value, url: app.baseUrl }]);
-  const page = await context.newPage();
-  creator = { page, context, consoleErrors: [], requests: [], responses: [], close: () => context.close() };
-  page.on('console', (m) => void (m.type() === 'error' && creator.consoleErrors.push(m.text())));
-  page.on('pageerror', (e) => creator.consoleErrors.push(e.message));
-  page.on('request', (r) => creator.requests.push({ url: r.url(), resourceType: r.resourceType() }));
+  creator = await openPage(browser, { signedIn: { cookie: client.cookie!, url: app.baseUrl } });
 });
 
 afterAll(async () => {

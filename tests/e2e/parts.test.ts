@@ -1,8 +1,16 @@
 import { readFile } from 'node:fs/promises';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it, onTestFailed } from 'vitest';
 import { createUser } from '../helpers/factories';
-import { checkAccessibility, checkPhoneWidth, expectOnlyLoopback, launchBrowser, visit, type TrackedPage } from '../helpers/browser';
+import {
+  checkAccessibility,
+  checkPhoneWidth,
+  expectOnlyLoopback,
+  launchBrowser,
+  openPage,
+  visit,
+  type TrackedPage,
+} from '../helpers/browser';
 import { signInByEmail, TestClient } from '../helpers/http-client';
 import { startTestApp, type TestApp } from '../helpers/test-app';
 import { TEST_DIST_DIR } from '../setup/build-global';
@@ -15,7 +23,6 @@ const CSV_HEADER =
 
 let app: TestApp;
 let browser: Browser;
-let context: BrowserContext;
 let tracked: TrackedPage;
 let client: TestClient;
 
@@ -25,14 +32,7 @@ beforeAll(async () => {
   client = new TestClient(app.baseUrl);
   await signInByEmail(client, app.deps.db, 'tova@example.test');
   browser = await launchBrowser();
-  context = await browser.newContext({ viewport: { width: 1280, height: 900 }, acceptDownloads: true });
-  const [name, value] = client.cookie!.split('=') as [string, string];
-  await context.addCookies([{ name, value, url: app.baseUrl }]);
-  const page = await context.newPage();
-  tracked = { page, context, consoleErrors: [], requests: [], responses: [], close: () => context.close() };
-  page.on('console', (m) => void (m.type() === 'error' && tracked.consoleErrors.push(m.text())));
-  page.on('pageerror', (e) => tracked.consoleErrors.push(e.message));
-  page.on('request', (r) => tracked.requests.push({ url: r.url(), resourceType: r.resourceType() }));
+  tracked = await openPage(browser, { signedIn: { cookie: client.cookie!, url: app.baseUrl }, acceptDownloads: true });
 });
 
 afterAll(async () => {

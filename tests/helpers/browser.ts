@@ -36,8 +36,18 @@ export interface TrackedPage {
   close(): Promise<void>;
 }
 
-export async function openPage(browser: Browser): Promise<TrackedPage> {
-  const context = await browser.newContext({ viewport: DESKTOP });
+export interface OpenPageOptions {
+  /** A session to carry: the `name=value` cookie of a signed-in TestClient, for the app at `url`. */
+  signedIn?: { cookie: string; url: string };
+  acceptDownloads?: boolean;
+}
+
+export async function openPage(browser: Browser, opts: OpenPageOptions = {}): Promise<TrackedPage> {
+  const context = await browser.newContext({ viewport: DESKTOP, acceptDownloads: opts.acceptDownloads ?? false });
+  if (opts.signedIn) {
+    const [name, ...rest] = opts.signedIn.cookie.split('=');
+    await context.addCookies([{ name: name!, value: rest.join('='), url: opts.signedIn.url }]);
+  }
   const page = await context.newPage();
   const tracked: TrackedPage = { page, context, consoleErrors: [], requests: [], responses: [], close: () => context.close() };
   page.on('console', (msg) => {
