@@ -63,3 +63,27 @@ export async function figureResource(deps: AppDeps, params: { figureId: number }
   const f = await deps.db.selectFrom('figures').select('episode_id').where('id', '=', params.figureId).executeTakeFirst();
   return f ? episodeResource(deps, { episodeId: f.episode_id }) : null;
 }
+
+/** The post named by `:postId` with its episode's and build's visibility. */
+export async function postResource(deps: AppDeps, params: { postId: number }): Promise<Resource | null> {
+  const p = await deps.db
+    .selectFrom('posts as p')
+    .innerJoin('episodes as e', 'e.id', 'p.episode_id')
+    .innerJoin('builds as b', 'b.id', 'p.build_id')
+    .select(['p.id', 'p.episode_id', 'p.build_id', 'p.author_id', 'p.hidden_at', 'e.status', 'e.deleted_at', 'b.visibility', 'b.deleted_at as build_deleted_at'])
+    .where('p.id', '=', params.postId)
+    .executeTakeFirst();
+  return p
+    ? {
+        kind: 'post',
+        id: p.id,
+        episodeId: p.episode_id,
+        buildId: p.build_id,
+        visibility: p.visibility,
+        status: p.status,
+        deleted: p.deleted_at !== null || p.build_deleted_at !== null,
+        authorId: p.author_id,
+        hidden: p.hidden_at !== null,
+      }
+    : null;
+}

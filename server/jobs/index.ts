@@ -1,10 +1,12 @@
 import type { AppDeps } from '../app-deps';
 import { registerEpisodeJobs } from './episodes';
 import { registerMaintenance } from './maintenance';
+import { registerNoticeJobs } from './notices';
 
 /** Every feature registers its jobs here, once, before the queue starts. */
 export function registerJobs(deps: AppDeps): void {
   deps.outbox.register();
   registerMaintenance(deps);
   registerEpisodeJobs(deps);
+  registerNoticeJobs(deps);
 }

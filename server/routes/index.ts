@@ -4,6 +4,8 @@ import { adminRoutes } from './admin';
 import { buildRoutes } from './builds';
 import { episodeEditorRoutes } from './episode-editor';
 import { figureRoutes } from './figures';
+import { followingRoutes } from './following';
+import { postRoutes } from './posts';
 import { openItemRoutes } from './open-items';
 import { partLineRoutes } from './part-lines';
 import { readingRoutes } from './reading';
@@ -28,4 +30,6 @@ export const routeRegistry: readonly RouteSpec[] = [
   ...workbenchRoutes,
   ...readingRoutes,
   ...partLineRoutes,
+  ...postRoutes,
+  ...followingRoutes,
 ];
