@@ -66,7 +66,7 @@ export function PostActions({
           <button
             type="button"
             className={linkButton}
-            onClick={() => (post.hidden ? moderate.mutate({ postId: post.id, hidden: false, reason: 'Restored by the build team' }) : setMode('hide'))}
+            onClick={() => (post.hidden ? moderate.mutate({ postId: post.id, hidden: false, reason: 'Restored after review' }) : setMode('hide'))}
           >
             {post.hidden ? 'Restore' : 'Hide'}
           </button>
