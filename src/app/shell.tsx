@@ -162,7 +162,7 @@ export function SiteHeader() {
             ))}
           </ul>
         </nav>
-        <div className="ml-auto flex items-center gap-3">
+        <div className="ml-auto flex flex-wrap items-center justify-end gap-x-3 gap-y-1">
           <HeaderSearch />
           <AccountArea />
         </div>

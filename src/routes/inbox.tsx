@@ -38,7 +38,7 @@ export function InboxPage() {
         reply box.
       </PageHeading>
       {data ? (
-        <Form method="get" className="mb-5 grid grid-cols-2 gap-3 sm:grid-cols-5 sm:items-end" key={sp.toString()}>
+        <Form method="get" className="mt-6 mb-5 grid grid-cols-2 gap-3 sm:grid-cols-5 sm:items-end" key={sp.toString()}>
           <label className="text-[14px] font-semibold">
             Build
             <select name="buildId" defaultValue={q.buildId ?? ''} className={select}>

@@ -21,7 +21,7 @@ export function NotificationsPage() {
       <title>Notifications — Rivet &amp; Reel</title>
       <meta name="robots" content="noindex" />
       <PageHeading label="Your account" title="Notifications">
-        Which of these also come by e-mail is up to you: <Link to="/account/notices">notice settings</Link>.
+        Which of these also come by e-mail is up to you: <Link to="/account/notices" className="underline underline-offset-2">notice settings</Link>.
       </PageHeading>
       {data ? (
         <NotificationsList data={data} />

@@ -28,7 +28,7 @@ export function FollowButtons({
   if (!signedIn)
     return (
       <p className="mt-3 text-[15px] text-ink-2">
-        <Link to={signInPath}>Sign in</Link> to follow this build and hear about new episodes.
+        <Link to={signInPath} className="underline underline-offset-2">Sign in</Link> to follow this build and hear about new episodes.
       </p>
     );
   const onBuild = following.data?.builds.some((b) => b.id === buildId) ?? false;

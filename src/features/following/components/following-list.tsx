@@ -18,7 +18,7 @@ export function FollowingList({ data }: { data: FollowingResponse }) {
         {nothing ? (
           <StateMessage kind="empty" title="You follow nothing yet.">
             <p>
-              Follow a build or its creator from any episode page. <Link to={paths.builds()}>Browse the builds</Link>.
+              Follow a build or its creator from any episode page. <Link to={paths.builds()} className="underline underline-offset-2">Browse the builds</Link>.
             </p>
           </StateMessage>
         ) : !data.episodes.length ? (

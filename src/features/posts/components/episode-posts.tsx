@@ -80,7 +80,7 @@ export function EpisodePosts({ episodeId, chapters, signInPath }: { episodeId: n
         <PostForm episodeId={episodeId} chapters={chapters} />
       ) : !data.signedIn ? (
         <p className="mt-6 text-ink-2">
-          <a href={signInPath}>Sign in</a> to ask a question or make a suggestion on a chapter.
+          <a href={signInPath} className="underline underline-offset-2">Sign in</a> to ask a question or make a suggestion on a chapter.
         </p>
       ) : null}
     </section>

@@ -50,7 +50,7 @@ export function InboxList({ items, isAdmin }: { items: readonly InboxItem[]; isA
             context={
               <p className="label-condensed mb-1">
                 {p.build.title} ·{' '}
-                <Link to={`${paths.episode(p.build.ownerHandle, p.build.slug, p.episode.slug)}#post-${p.id}`}>
+                <Link to={`${paths.episode(p.build.ownerHandle, p.build.slug, p.episode.slug)}#post-${p.id}`} className="underline underline-offset-2">
                   Ep. {p.episode.number}: {p.episode.title}
                 </Link>
                 {p.unanswered ? <span className="ml-2 text-oxide-2">Unanswered</span> : null}

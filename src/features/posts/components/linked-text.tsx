@@ -24,7 +24,7 @@ function linkify(text: string): ReactNode[] {
     if (!/^https?:\/\//i.test(m.href)) continue;
     if (m.start > at) out.push(text.slice(at, m.start));
     out.push(
-      <a key={m.start} href={m.href} rel="nofollow ugc noopener noreferrer" className="break-all">
+      <a key={m.start} href={m.href} rel="nofollow ugc noopener noreferrer" className="break-all underline underline-offset-2">
         {m.value}
       </a>,
     );

@@ -12,7 +12,7 @@ export function UnansweredPostsPanel({ posts, openCount }: { posts: Workbench['u
         <p>Questions and suggestions from readers that wait for an answer from the build team show here.</p>
         {openCount ? (
           <p>
-            {openCount} still open in the <Link to="/inbox">inbox</Link>.
+            {openCount} still open in the <Link to="/inbox" className="underline underline-offset-2">inbox</Link>.
           </p>
         ) : null}
       </StateMessage>
@@ -30,7 +30,7 @@ export function UnansweredPostsPanel({ posts, openCount }: { posts: Workbench['u
         ))}
       </ul>
       <p className="mt-2">
-        <Link to="/inbox">Answer in the inbox</Link> · {openCount} open
+        <Link to="/inbox" className="underline underline-offset-2">Answer in the inbox</Link> · {openCount} open
       </p>
     </>
   );
