@@ -44,6 +44,7 @@ beforeAll(async () => {
   });
   const reader = await createUser(db, { handle: 'tobin-quarry', display_name: 'Tobin Quarry', email: 'tobin@example.test' });
   await db.insertInto('follows').values({ user_id: reader.id, build_id: build.id }).execute();
+  await createUser(db, { handle: 'mod-ines', display_name: 'Ines Moderator', email: 'ines@example.test', is_admin: true });
   const e = await createEpisode(db, {
     build_id: build.id,
     slug: 'caliper-day',
@@ -125,7 +126,24 @@ describe('followers', () => {
     await notes.getByText(/A reply to your question/).waitFor();
     expect(await notes.getByText(/unread/).count()).toBeGreaterThan(0);
     await visit(follower, `${app.baseUrl}/account/notices`);
-    await visit(owner, `${app.baseUrl}/workbench`);
+    const workbench = await visit(owner, `${app.baseUrl}/workbench`);
+    // The one post was answered from the inbox: nothing waits on the Workbench.
+    await workbench.getByText('No unanswered posts.').waitFor();
+
+    // A report reaches the moderation queue, where an admin hides the post with a reason.
+    const reporter = new TestClient(app.baseUrl);
+    await signInByEmail(reporter, app.deps.db, 'ines@example.test');
+    const post = await app.deps.db.selectFrom('posts').select('id').where('parent_id', 'is', null).executeTakeFirstOrThrow();
+    expect((await reporter.post(`/api/posts/${post.id}/reports`, { reason: 'Checking the queue' })).status).toBe(204);
+    const admin = await signedInPage('ines@example.test');
+    const queue = await visit(admin, `${app.baseUrl}/moderation`);
+    await queue.getByText(/Reported by Ines Moderator/).waitFor();
+    await queue.getByRole('button', { name: 'Hide' }).click();
+    await queue.getByLabel('Why hide it? (recorded)').fill('Test of the queue');
+    await queue.getByRole('button', { name: 'Hide', exact: true }).last().click();
+    await queue.getByText(/Hidden by Ines Moderator/).waitFor();
+    expect(admin.consoleErrors).toEqual([]);
+    await admin.close();
     expect(follower.consoleErrors).toEqual([]);
     expectOnlyLoopback(follower);
   });
