@@ -110,7 +110,7 @@ export async function noticeNewPost(trx: Trx, deps: NoticeDeps, postId: number):
       scope: 'new-posts',
       kind: 'notice-new-post',
       subject: `New ${p.kind} on ${e.build_title}, episode ${e.number}`,
-      paragraphs: [`${p.author_name} asked on “${e.title}”:`, excerpt(p.body)],
+      paragraphs: [`${p.author_name} ${p.kind === 'suggestion' ? 'made a suggestion' : 'asked a question'} on “${e.title}”:`, excerpt(p.body)],
       links: [{ label: 'Answer it in your inbox', path: '/inbox' }],
       reason: `You are on the build team of ${e.build_title}.`,
     }));
