@@ -9,6 +9,8 @@ export interface OutgoingMail {
   html?: string | null;
   /** Stable per outbox row, so a resend after a crash is recognisable as the same message. */
   messageId: string;
+  /** Extra headers such as List-Unsubscribe (RFC 8058). */
+  headers?: Record<string, string>;
 }
 
 /** Sends e-mail; SMTP in every environment (the capturing fake locally). */
@@ -38,6 +40,7 @@ export function createSmtpMailer(config: Pick<Config, 'SMTP_HOST' | 'SMTP_PORT' 
         text: mail.text,
         ...(mail.html ? { html: mail.html } : {}),
         messageId: mail.messageId,
+        ...(mail.headers && Object.keys(mail.headers).length ? { headers: mail.headers } : {}),
       });
     },
     async verify() {

@@ -8,7 +8,18 @@ export type { Actor } from './actor';
 export type Resource =
   | { kind: 'build'; id: number; visibility: BuildVisibility; deleted: boolean; pendingTransferTo: number | null }
   | { kind: 'episode'; id: number; buildId: number; visibility: BuildVisibility; status: EpisodeStatus; deleted: boolean }
-  | { kind: 'account'; userId: number };
+  | { kind: 'account'; userId: number }
+  | {
+      kind: 'post';
+      id: number;
+      episodeId: number;
+      buildId: number;
+      visibility: BuildVisibility;
+      status: EpisodeStatus;
+      deleted: boolean;
+      authorId: number;
+      hidden: boolean;
+    };
 
 type Rule = {
   /** Visitors get 401 (sign in) rather than 403 when denied. */
@@ -19,7 +30,7 @@ type Rule = {
 const role = (actor: Actor, buildId: number) => actor?.builds.get(buildId);
 /** The build a build or episode resource belongs to. */
 const buildOf = (r: Resource | undefined): number | undefined =>
-  r?.kind === 'build' ? r.id : r?.kind === 'episode' ? r.buildId : undefined;
+  r?.kind === 'build' ? r.id : r?.kind === 'episode' || r?.kind === 'post' ? r.buildId : undefined;
 const isTeam = (actor: Actor, r: Resource | undefined) => {
   const b = buildOf(r);
   return b !== undefined && role(actor, b) !== undefined;
@@ -47,6 +58,15 @@ const rules = {
   'build.team.manage': { signedIn: true, allow: isOwner },
   'admin.accounts': { signedIn: true, allow: (a) => a?.isAdmin === true },
   'admin.suppliers': { signedIn: true, allow: (a) => a?.isAdmin === true },
+  // Followers: anyone signed in follows, posts, replies and reports; authors edit and delete their
+  // own; the build team answers and sets states; the build team and admins hide and restore.
+  follow: { signedIn: true, allow: (a) => a !== null },
+  'post.create': { signedIn: true, allow: (a) => a !== null },
+  'post.report': { signedIn: true, allow: (a) => a !== null },
+  'post.author': { signedIn: true, allow: (a, r) => a !== null && r?.kind === 'post' && r.authorId === a.userId },
+  'post.answer': { signedIn: true, allow: isTeam },
+  'post.moderate': { signedIn: true, allow: (a, r) => a?.isAdmin === true || isTeam(a, r) },
+  'admin.moderation': { signedIn: true, allow: (a) => a?.isAdmin === true },
 } satisfies Record<string, Rule>;
 
 export type PolicyAction = keyof typeof rules;
@@ -63,7 +83,9 @@ export function canSee(actor: Actor, resource: Resource | undefined): boolean {
   // Deleted things stay visible to their owner only, for the 30 days they can be restored.
   if (resource.deleted) return isOwner(actor, resource);
   if (isTeam(actor, resource)) return true;
-  if (resource.kind === 'episode' && resource.status !== 'published') return false;
+  if ((resource.kind === 'episode' || resource.kind === 'post') && resource.status !== 'published') return false;
+  // A hidden post vanishes for everyone but its author, the build team (above) and admins.
+  if (resource.kind === 'post' && resource.hidden && actor?.userId !== resource.authorId && actor?.isAdmin !== true) return false;
   return resource.visibility !== 'private';
 }
 

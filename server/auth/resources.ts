@@ -71,3 +71,37 @@ export async function mediaResource(deps: AppDeps, params: { mediaId: number }):
   // A receipt is the build team's alone, whatever the build's visibility: to anyone else it does not exist (404).
   return build && m?.kind === 'receipt' && build.kind === 'build' ? { ...build, visibility: 'private' } : build;
 }
+
+/** The post named by `:postId` with its episode's and build's visibility. */
+export async function postResource(deps: AppDeps, params: { postId: number }): Promise<Resource | null> {
+  const p = await deps.db
+    .selectFrom('posts as p')
+    .innerJoin('episodes as e', 'e.id', 'p.episode_id')
+    .innerJoin('builds as b', 'b.id', 'p.build_id')
+    .select([
+      'p.id',
+      'p.episode_id',
+      'p.build_id',
+      'p.author_id',
+      'p.hidden_at',
+      'e.status',
+      'e.deleted_at',
+      'b.visibility',
+      'b.deleted_at as build_deleted_at',
+    ])
+    .where('p.id', '=', params.postId)
+    .executeTakeFirst();
+  return p
+    ? {
+        kind: 'post',
+        id: p.id,
+        episodeId: p.episode_id,
+        buildId: p.build_id,
+        visibility: p.visibility,
+        status: p.status,
+        deleted: p.deleted_at !== null || p.build_deleted_at !== null,
+        authorId: p.author_id,
+        hidden: p.hidden_at !== null,
+      }
+    : null;
+}

@@ -1,4 +1,5 @@
 import type { ColumnType, Generated } from 'kysely';
+import type { FollowersTables } from './followers-tables';
 
 type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
 type NullableTimestamp = ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
@@ -243,6 +244,8 @@ export interface OutboxMessagesTable {
   next_attempt_at: Generated<Date>;
   lease_until: NullableTimestamp;
   last_error: string | null;
+  /** Extra headers (List-Unsubscribe and friends), migration 2026-12-02_1900. */
+  headers: ColumnType<Record<string, string>, string | undefined, string>;
   sent_at: NullableTimestamp;
   created_at: Generated<Date>;
   updated_at: Generated<Date>;
@@ -337,7 +340,7 @@ export interface EpisodeGalleryTable {
   position: number;
 }
 
-export interface Database {
+export interface Database extends FollowersTables {
   users: UsersTable;
   builds: BuildsTable;
   episodes: EpisodesTable;

@@ -11,6 +11,9 @@ export const RATE_LIMITS = {
   // New supplier records are site-wide: a typo storm should not fill the list.
   'supplier-create': { points: 100, duration: 60 * 60 },
   'ledger-import': { points: 60, duration: 60 * 60 },
+  // Posts and replies per account; reports per account (a flood of either is the abuse).
+  'post-create': { points: 20, duration: 10 * 60 },
+  'post-report': { points: 10, duration: 60 * 60 },
 } satisfies Record<string, { points: number; duration: number }>;
 
 export type RateLimitName = keyof typeof RATE_LIMITS;

@@ -1,6 +1,7 @@
 import { sql } from 'kysely';
 import type { AppDeps } from '../app-deps';
 import { TRASH_DAYS } from '../services/builds';
+import { announceEpisode } from '../services/notices';
 import { runPublishChecks } from '../services/publish-checks';
 
 export const PUBLISH_DUE_JOB = 'episodes.publish-due';
@@ -54,6 +55,7 @@ export async function publishDueEpisodes(deps: AppDeps, onlyId?: number): Promis
         )
         .where('id', '=', id)
         .execute();
+      if (!problems.length) await announceEpisode(trx, deps, id);
       return problems.length === 0;
     });
     if (done) published.push(id);

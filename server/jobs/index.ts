@@ -2,6 +2,7 @@ import type { AppDeps } from '../app-deps';
 import { registerEpisodeJobs } from './episodes';
 import { registerMaintenance } from './maintenance';
 import { registerMediaJobs } from '../services/media/store';
+import { registerNoticeJobs } from './notices';
 
 /** Every feature registers its jobs here, once, before the queue starts. */
 export function registerJobs(deps: AppDeps): void {
@@ -9,4 +10,5 @@ export function registerJobs(deps: AppDeps): void {
   registerMaintenance(deps);
   registerEpisodeJobs(deps);
   registerMediaJobs(deps);
+  registerNoticeJobs(deps);
 }

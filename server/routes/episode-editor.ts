@@ -71,7 +71,7 @@ export const episodeEditorRoutes = [
     resource: episodeResource,
     handler: async ({ deps, params, body, res }) => {
       await refuseUnpublishable(deps, params.episodeId);
-      return versioned(deps, res, params.episodeId, () => setStatus(deps.db, params.episodeId, body.version, 'published'));
+      return versioned(deps, res, params.episodeId, () => setStatus(deps, params.episodeId, body.version, 'published'));
     },
   }),
   defineRoute({
@@ -87,7 +87,7 @@ export const episodeEditorRoutes = [
       if (when.getTime() <= Date.now() + 30_000)
         throw new HttpError(400, 'invalid_request', 'Pick a time in the future', { publishAt: ['must be in the future'] });
       await refuseUnpublishable(deps, params.episodeId);
-      const out = await versioned(deps, res, params.episodeId, () => setStatus(deps.db, params.episodeId, body.version, 'scheduled', when));
+      const out = await versioned(deps, res, params.episodeId, () => setStatus(deps, params.episodeId, body.version, 'scheduled', when));
       if (out) await deps.queue.send(PUBLISH_DUE_JOB, { episodeId: params.episodeId }, { startAfter: when });
       return out;
     },
@@ -101,7 +101,7 @@ export const episodeEditorRoutes = [
     body: episodeVersionBody,
     resource: episodeResource,
     handler: ({ deps, params, body, res }) =>
-      versioned(deps, res, params.episodeId, () => setStatus(deps.db, params.episodeId, body.version, 'draft')),
+      versioned(deps, res, params.episodeId, () => setStatus(deps, params.episodeId, body.version, 'draft')),
   }),
   defineRoute({
     method: 'delete',

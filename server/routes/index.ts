@@ -5,6 +5,8 @@ import { buildRoutes } from './builds';
 import { episodeEditorRoutes } from './episode-editor';
 import { figureRoutes } from './figures';
 import { mediaRoutes } from './media';
+import { followingRoutes } from './following';
+import { postRoutes } from './posts';
 import { openItemRoutes } from './open-items';
 import { partLineRoutes } from './part-lines';
 import { readingRoutes } from './reading';
@@ -30,4 +32,6 @@ export const routeRegistry: readonly RouteSpec[] = [
   ...readingRoutes,
   ...partLineRoutes,
   ...mediaRoutes,
+  ...postRoutes,
+  ...followingRoutes,
 ];

@@ -4,10 +4,17 @@ import type { SeedSection } from './section';
 import { demoAccountsSection } from './sections/demo-accounts';
 import { demoBuildsSection } from './sections/demo-builds';
 import { demoFiguresSection } from './sections/demo-figures';
+import { demoFollowersSection } from './sections/demo-followers';
 import { demoPartsSection } from './sections/demo-parts';
 
 /** Every demo-seed section, in the order they run (later sections may use earlier ones' rows). */
-export const seedSections: readonly SeedSection[] = [demoAccountsSection, demoBuildsSection, demoPartsSection, demoFiguresSection];
+export const seedSections: readonly SeedSection[] = [
+  demoAccountsSection,
+  demoBuildsSection,
+  demoPartsSection,
+  demoFiguresSection,
+  demoFollowersSection,
+];
 
 /** Runs every section in its own transaction; safe to run on every start. */
 export async function runSeed(db: Db, sections: readonly SeedSection[] = seedSections): Promise<string[]> {

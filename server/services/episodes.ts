@@ -7,6 +7,7 @@ import type { Database } from '../db/database';
 import type { Db } from '../db/kysely';
 import { HttpError } from '../http/http-error';
 import { figureSystemKeys } from './figures';
+import { announceEpisode, type NoticeDeps } from './notices';
 import { renderWriteUp, type WriteUpImages } from './write-up-html';
 import { presentImage } from '../presenters/media';
 
@@ -230,15 +231,15 @@ export async function updateEpisode(db: Db, episodeId: number, input: EpisodeUpd
   });
 }
 
-/** Changes the publication state under the version check; `when` is for scheduling. */
+/** Changes the publication state under the version check; `when` is for scheduling. Publishing announces the episode to its followers (once). */
 export async function setStatus(
-  db: Db,
+  deps: NoticeDeps & { db: Db },
   episodeId: number,
   version: number,
   status: 'draft' | 'scheduled' | 'published',
   when?: Date,
 ): Promise<void> {
-  await db.transaction().execute(async (trx) => {
+  await deps.db.transaction().execute(async (trx) => {
     const row = await lockAt(trx, episodeId, version);
     await trx
       .updateTable('episodes')
@@ -252,6 +253,7 @@ export async function setStatus(
       })
       .where('id', '=', episodeId)
       .execute();
+    if (status === 'published') await announceEpisode(trx, deps, episodeId);
   });
 }
 

@@ -14,6 +14,14 @@ export interface QueuedEmail {
   html?: string;
   /** What caused the message (`sign-in-link`, `invitation`, …). */
   kind: string;
+  /** Extra headers, e.g. `List-Unsubscribe` and `List-Unsubscribe-Post` for notices. */
+  headers?: Record<string, string>;
+}
+
+/** An SMTP answer in the 5xx range: the address will not work on a retry. */
+function isPermanent(err: unknown): boolean {
+  const code = typeof err === 'object' && err !== null && 'responseCode' in err ? Number(err.responseCode) : NaN;
+  return code >= 500 && code < 600;
 }
 
 export interface OutboxOptions {
@@ -34,6 +42,7 @@ type Row = {
   subject: string;
   text_body: string;
   html_body: string | null;
+  headers: Record<string, string>;
   attempts: number;
 };
 
@@ -83,6 +92,7 @@ export class Outbox {
         text_body: mail.text,
         html_body: mail.html ?? null,
         kind: mail.kind,
+        headers: JSON.stringify(mail.headers ?? {}),
       })
       .returning('id')
       .executeTakeFirstOrThrow();
@@ -116,7 +126,7 @@ export class Outbox {
           order by id
           limit ${this.batchSize}
           for update skip locked)
-       returning id, message_id, to_address, subject, text_body, html_body, attempts`.execute(this.db);
+       returning id, message_id, to_address, subject, text_body, html_body, headers, attempts`.execute(this.db);
     return result.rows;
   }
 
@@ -129,9 +139,18 @@ export class Outbox {
         text: row.text_body,
         html: row.html_body,
         messageId: row.message_id,
+        headers: row.headers,
       });
     } catch (err) {
-      const final = row.attempts >= this.maxAttempts;
+      const permanent = isPermanent(err);
+      const final = permanent || row.attempts >= this.maxAttempts;
+      // A refused address is marked so notices skip it from now on (sign-in mail still tries).
+      if (permanent)
+        await this.db
+          .insertInto('mail_suppressions')
+          .values({ address: row.to_address.toLowerCase(), reason: err instanceof Error ? err.message.slice(0, 300) : 'refused' })
+          .onConflict((oc) => oc.column('address').doNothing())
+          .execute();
       const delayMs = Math.min(this.baseBackoffMs * 2 ** (row.attempts - 1), 3_600_000);
       this.logger.warn({ err, outboxId: row.id, attempts: row.attempts, final }, 'e-mail delivery failed');
       await this.db

@@ -2,6 +2,7 @@ import { sql } from 'kysely';
 import type { Workbench } from '../../src/shared/schemas/episodes';
 import type { Db } from '../db/kysely';
 import { TRASH_DAYS } from './builds';
+import { getInbox } from './posts-read';
 
 const iso = (d: Date | null) => d?.toISOString() ?? null;
 const purgeAfter = (d: Date) => new Date(d.getTime() + TRASH_DAYS * 86_400_000).toISOString();
@@ -114,7 +115,21 @@ export async function getWorkbench(db: Db, userId: number): Promise<Workbench> {
     updatedAt: r.updated_at.toISOString(),
     buildTitle: r.build_title,
   });
+  const inbox = await getInbox(db, userId, { order: 'unanswered' }, 20);
   return {
+    unansweredPosts: inbox.items
+      .filter((p) => p.unanswered && !p.hidden)
+      .slice(0, 8)
+      .map((p) => ({
+        id: p.id,
+        kind: p.kind,
+        excerpt: p.body.length > 120 ? `${p.body.slice(0, 119)}…` : p.body,
+        authorName: p.author.displayName,
+        createdAt: p.createdAt,
+        buildTitle: p.build.title,
+        episodeNumber: p.episode.number,
+      })),
+    openPostCount: inbox.openCount,
     builds: builds.map((b) => ({
       id: b.id,
       slug: b.slug,

@@ -11,7 +11,12 @@ import { buildsDirectoryLoader, BuildsDirectoryPage } from '../routes/builds-dir
 import { buildTeamLoader, BuildTeamPage } from '../routes/build-team';
 import { creatorPageLoader, CreatorPage } from '../routes/creator-page';
 import { episodePageLoader, EpisodePage } from '../routes/episode-page';
+import { followingLoader, FollowingPage } from '../routes/following';
 import { FrontPage, frontPageQuery } from '../routes/front-page';
+import { inboxLoader, InboxPage } from '../routes/inbox';
+import { moderationQueueLoader, ModerationQueuePage } from '../routes/moderation-queue';
+import { noticeSettingsLoader, NoticeSettingsPage } from '../routes/notice-settings';
+import { notificationsLoader, NotificationsPage } from '../routes/notifications';
 import { InvitationAcceptPage } from '../routes/invitation-accept';
 import { NotFound } from '../routes/not-found';
 import { primeSession, requireAccount } from '../routes/route-guards';
@@ -108,6 +113,11 @@ export function createRoutes({ queryClient, api }: RouteDeps): RouteObject[] {
           loader: signedIn,
           lazy: () => import('../routes/episode-editor'),
         },
+        { path: 'inbox', id: 'inbox', loader: inboxLoader(deps), Component: InboxPage },
+        { path: 'following', id: 'following', loader: followingLoader(deps), Component: FollowingPage },
+        { path: 'notifications', id: 'notifications', loader: notificationsLoader(deps), Component: NotificationsPage },
+        { path: 'account/notices', id: 'notice-settings', loader: noticeSettingsLoader(deps), Component: NoticeSettingsPage },
+        { path: 'moderation', id: 'moderation-queue', loader: moderationQueueLoader(deps), Component: ModerationQueuePage },
         { path: 'admin/accounts', id: 'admin-accounts', loader: adminAccountsLoader(deps), Component: AdminAccountsPage },
         { path: 'workshop', id: 'workshop', Component: WorkshopPage },
         { path: 'admin/suppliers', id: 'admin-suppliers', loader: adminSuppliersLoader(deps), Component: AdminSuppliersPage },

@@ -4,6 +4,7 @@ import { useSession } from '../features/accounts/api/get-session';
 import { AccountMenu, type AccountMenuItem } from '../features/accounts/components/account-menu';
 import { accountPaths } from '../features/accounts/paths';
 import { adminPaths } from '../features/admin/paths';
+import { HeaderNotices } from '../features/following/components/header-notices';
 import { workbenchPaths } from '../features/workbench/paths';
 import { Notice } from '../components/ui/notice';
 import { StateMessage } from '../components/ui/state-message';
@@ -49,10 +50,18 @@ function navClass({ isActive }: { isActive: boolean }): string {
 export function accountMenuItems(account: Account): AccountMenuItem[] {
   const items: AccountMenuItem[] = [
     { label: 'Workbench', to: workbenchPaths.home() },
-    { label: 'Account settings', to: accountPaths.settings() },
+    { label: 'Following', to: '/following' },
+    { label: 'Notifications', to: '/notifications' },
   ];
+  if (account.builds.length) items.splice(1, 0, { label: 'Inbox', to: '/inbox' });
+  items.push({ label: 'Account settings', to: accountPaths.settings() }, { label: 'Notice settings', to: '/account/notices' });
   if (account.builds.some((b) => b.role === 'owner')) items.push({ label: 'Build teams', to: accountPaths.builds() });
-  if (account.isAdmin) items.push({ label: 'Accounts', to: adminPaths.accounts() }, { label: 'Suppliers', to: adminPaths.suppliers() });
+  if (account.isAdmin)
+    items.push(
+      { label: 'Accounts', to: adminPaths.accounts() },
+      { label: 'Suppliers', to: adminPaths.suppliers() },
+      { label: 'Moderation queue', to: '/moderation' },
+    );
   return items;
 }
 
@@ -60,7 +69,13 @@ export function accountMenuItems(account: Account): AccountMenuItem[] {
 function AccountArea() {
   const { data, isError } = useSession();
   const { pathname, search } = useLocation();
-  if (data?.account) return <AccountMenu account={data.account} items={accountMenuItems(data.account)} />;
+  if (data?.account)
+    return (
+      <>
+        <HeaderNotices onTeam={data.account.builds.length > 0} />
+        <AccountMenu account={data.account} items={accountMenuItems(data.account)} />
+      </>
+    );
   if (!data && !isError) return <span aria-hidden="true" className="inline-block h-11 w-11" />;
   // On the sign-in pages, keep the return path they already carry instead of pointing back at them.
   const here = `${pathname}${search}`;
@@ -152,7 +167,7 @@ export function SiteHeader() {
             ))}
           </ul>
         </nav>
-        <div className="ml-auto flex items-center gap-3">
+        <div className="ml-auto flex flex-wrap items-center justify-end gap-x-3 gap-y-1">
           <HeaderSearch />
           <AccountArea />
         </div>

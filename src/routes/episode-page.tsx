@@ -9,6 +9,12 @@ import { StateMessage } from '../components/ui/state-message';
 import { formatHours } from '../features/builds/lib/hours';
 import { episodeFiguresOptions } from '../features/figures/api/get-episode-figures';
 import { EpisodeFigures } from '../features/figures/components/episode-figures';
+import { useSession } from '../features/accounts/api/get-session';
+import { accountPaths } from '../features/accounts/paths';
+import { FollowButtons } from '../features/following/components/follow-buttons';
+import { episodePostsOptions, useEpisodePosts } from '../features/posts/api/get-episode-posts';
+import { EpisodePosts } from '../features/posts/components/episode-posts';
+import { groupByChapter } from '../shared/post-anchors';
 import { buildTotalsOptions, useBuildTotals } from '../features/parts/api/get-build-totals';
 import { episodePartsOptions, useEpisodeParts } from '../features/parts/api/get-episode-parts';
 import { PublicPartsTable } from '../features/parts/components/public-parts-table';
@@ -33,6 +39,7 @@ export function episodePageLoader(deps: LoaderDeps) {
       deps.queryClient.ensureQueryData(episodePartsOptions(deps.api, episodeId)).catch(() => undefined),
       deps.queryClient.ensureQueryData(buildTotalsOptions(deps.api, buildId)).catch(() => undefined),
       deps.queryClient.ensureQueryData(episodeFiguresOptions(deps.api, episodeId)).catch(() => undefined),
+      deps.queryClient.ensureQueryData(episodePostsOptions(deps.api, episodeId)).catch(() => undefined),
     ]);
     return { episodeId, buildId };
   };
@@ -79,9 +86,21 @@ function useActiveChapter(chapters: EpisodeReading['chapters']): number | null {
   return active;
 }
 
+/** Post counts and adopted suggestions' notes per chapter, for the chapter rail. */
+function usePostMarks(episode: EpisodeReading) {
+  const { data } = useEpisodePosts(episode.id);
+  const groups = groupByChapter(episode.chapters, data?.items ?? []);
+  return {
+    counts: groups.map((g) => g.length),
+    adopted: groups.map((g) => g.flatMap((p) => (p.state === 'adopted' && p.adoptedNote ? [p.adoptedNote] : []))),
+  };
+}
+
 function Episode({ episode }: { episode: EpisodeReading }) {
   const { build } = episode;
   const active = useActiveChapter(episode.chapters);
+  const marks = usePostMarks(episode);
+  const session = useSession();
   const buildPath = paths.build(build.owner.handle, build.slug);
   const canonical = paths.episode(build.owner.handle, build.slug, episode.slug);
   const systems = [...new Map(episode.chapters.flatMap((c) => (c.system ? [[c.system.key, c.system] as const] : []))).values()];
@@ -146,6 +165,15 @@ function Episode({ episode }: { episode: EpisodeReading }) {
             </Plate>
           ))}
         </p>
+        <FollowButtons
+          signedIn={!!session.data?.account}
+          buildId={build.id}
+          buildTitle={build.title}
+          creatorHandle={build.owner.handle}
+          creatorName={build.owner.displayName}
+          signInPath={accountPaths.signIn(canonical)}
+          showCreator={session.data?.account?.handle !== build.owner.handle}
+        />
         {episode.summary ? <p className="mt-3 max-w-measure font-serif text-[17px] leading-relaxed text-ink-2">{episode.summary}</p> : null}
         {episode.caution.length ? (
           <div className="mt-4">
@@ -170,7 +198,7 @@ function Episode({ episode }: { episode: EpisodeReading }) {
       </header>
 
       <div className="mt-7 grid grid-cols-1 gap-6 lg:grid-cols-[240px_minmax(0,1fr)] lg:gap-10">
-        <ChapterRail chapters={episode.chapters} active={active} />
+        <ChapterRail chapters={episode.chapters} active={active} postCounts={marks.counts} adopted={marks.adopted} />
         <div className="min-w-0">
           <article aria-label="Write-up">
             <WriteUp html={episode.writeUpHtml} />
@@ -180,7 +208,7 @@ function Episode({ episode }: { episode: EpisodeReading }) {
           <div className="mt-10">
             <EpisodeFigures episodeId={episode.id} />
           </div>
-          {/* The followers issue adds posts by chapter here. */}
+          <EpisodePosts episodeId={episode.id} chapters={episode.chapters} signInPath={accountPaths.signIn(canonical)} />
           <EpisodeOpenItems episode={episode} />
           <EpisodeNeighbours episode={episode} />
         </div>

@@ -26,6 +26,8 @@ const afterDelete: Workbench = {
   ],
   pendingTransfers: [],
   onOrder: [],
+  unansweredPosts: [],
+  openPostCount: 0,
 };
 
 afterEach(() => {

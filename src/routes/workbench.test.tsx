@@ -5,7 +5,16 @@ import { formatUtcDateTime } from '../components/ui/local-time';
 import type { Workbench } from '../shared/schemas/episodes';
 import { creator, json, makeBuild, makeEpisode, renderApp } from './workbench-test-app';
 
-const emptyWorkbench: Workbench = { builds: [], drafts: [], scheduled: [], deleted: [], pendingTransfers: [], onOrder: [] };
+const emptyWorkbench: Workbench = {
+  builds: [],
+  drafts: [],
+  scheduled: [],
+  deleted: [],
+  pendingTransfers: [],
+  onOrder: [],
+  unansweredPosts: [],
+  openPostCount: 0,
+};
 
 const fullWorkbench: Workbench = {
   builds: [
@@ -79,6 +88,8 @@ const fullWorkbench: Workbench = {
       openItemTitle: 'Bleed the brakes',
     },
   ],
+  unansweredPosts: [],
+  openPostCount: 0,
 };
 
 afterEach(() => {

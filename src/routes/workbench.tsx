@@ -90,7 +90,7 @@ function WorkbenchSections({ data }: { data: Workbench }) {
           <EpisodeQueue kind="scheduled" episodes={data.scheduled} />
         </Section>
         <Section id="posts" title="Unanswered posts">
-          <UnansweredPostsPanel />
+          <UnansweredPostsPanel posts={data.unansweredPosts} openCount={data.openPostCount} />
         </Section>
         <Section id="parts" title="Parts on order">
           <PartsOnOrderPanel lines={data.onOrder} />

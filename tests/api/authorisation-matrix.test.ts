@@ -28,6 +28,8 @@ interface World {
     figure: number;
     photo: number;
     receipt: number;
+    /** A question by the follower on a published episode of build A. */
+    post: number;
   };
   slugs: { owner: string; buildA: string; draft: string };
   clients: Record<ActorName, TestClient>;
@@ -228,6 +230,57 @@ const matrix: Record<string, { request: (w: World) => { path: string; body?: unk
     request: () => ({ path: '/api/admin/suppliers/1/merge', body: {} }),
     expect: adminOnly(400),
   },
+  // Followers: anyone signed in follows, posts, replies and reports; authors edit and delete their
+  // own; the build team answers and sets states; the build team and admins hide and restore; admins
+  // keep the moderation queue; the one-click unsubscribe needs no session at all.
+  'GET /episodes/:episodeId/posts': { request: (w) => ({ path: `/api/episodes/${w.ids.draft}/posts` }), expect: draftTeam(200) },
+  'POST /episodes/:episodeId/posts': {
+    request: (w) => ({ path: `/api/episodes/${w.ids.draft}/posts`, body: { kind: 'bogus' } }),
+    expect: draftTeam(400),
+  },
+  'POST /posts/:postId/replies': {
+    request: (w) => ({ path: `/api/posts/${w.ids.post}/replies`, body: { body: '' } }),
+    expect: signedIn(400),
+  },
+  'PATCH /posts/:postId': {
+    request: (w) => ({ path: `/api/posts/${w.ids.post}`, body: { body: '' } }),
+    expect: { visitor: 401, follower: 400, editor: 403, owner: 403, otherOwner: 403, sponsorMember: 403, admin: 403 },
+  },
+  'DELETE /posts/:postId': {
+    request: (w) => ({ path: `/api/posts/${w.ids.post}` }),
+    expect: { visitor: 401, follower: 204, editor: 403, owner: 403, otherOwner: 403, sponsorMember: 403, admin: 403 },
+    freshWorldPerActor: true,
+  },
+  'PUT /posts/:postId/state': {
+    request: (w) => ({ path: `/api/posts/${w.ids.post}/state`, body: { state: 'bogus' } }),
+    expect: teamOnly(400),
+  },
+  'POST /posts/:postId/reports': {
+    request: (w) => ({ path: `/api/posts/${w.ids.post}/reports`, body: { reason: '' } }),
+    expect: signedIn(400),
+  },
+  'PUT /posts/:postId/visibility': {
+    request: (w) => ({ path: `/api/posts/${w.ids.post}/visibility`, body: {} }),
+    expect: { visitor: 401, follower: 403, editor: 400, owner: 400, otherOwner: 403, sponsorMember: 403, admin: 400 },
+  },
+  'GET /inbox': { request: () => ({ path: '/api/inbox' }), expect: signedIn(200) },
+  'GET /moderation/queue': { request: () => ({ path: '/api/moderation/queue' }), expect: adminOnly(200) },
+  'PUT /builds/:buildId/follow': {
+    request: (w) => ({ path: `/api/builds/${w.ids.buildA}/follow`, body: { junk: 1 } }),
+    expect: signedIn(400),
+  },
+  'DELETE /builds/:buildId/follow': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}/follow` }), expect: signedIn(204) },
+  'PUT /creators/:handle/follow': {
+    request: (w) => ({ path: `/api/creators/${w.slugs.owner}/follow`, body: { junk: 1 } }),
+    expect: signedIn(400),
+  },
+  'DELETE /creators/:handle/follow': { request: (w) => ({ path: `/api/creators/${w.slugs.owner}/follow` }), expect: signedIn(204) },
+  'GET /following': { request: () => ({ path: '/api/following' }), expect: signedIn(200) },
+  'GET /notifications': { request: () => ({ path: '/api/notifications' }), expect: signedIn(200) },
+  'POST /notifications/read': { request: () => ({ path: '/api/notifications/read', body: {} }), expect: signedIn(400) },
+  'GET /account/notices': { request: () => ({ path: '/api/account/notices' }), expect: signedIn(200) },
+  'PUT /account/notices': { request: () => ({ path: '/api/account/notices', body: {} }), expect: signedIn(400) },
+  'POST /unsubscribe': { request: () => ({ path: '/api/unsubscribe', body: {} }), expect: all(400) },
 };
 
 let app: TestApp;
@@ -348,6 +401,32 @@ async function makeWorld(visibility: 'public' | 'unlisted' | 'private' = 'public
   const photo = await media('photo', 'a'.repeat(64));
   const receipt = await media('receipt', 'b'.repeat(64));
   await app.deps.storage.put(receipt.object_key, Buffer.from('%PDF'), 'application/pdf');
+  const published = await db
+    .insertInto('episodes')
+    .values({
+      build_id: buildA.id,
+      number: 2,
+      slug: `published-${buildA.id}`,
+      title: 'Out already',
+      status: 'published',
+      published_at: new Date(),
+      write_up: JSON.stringify({ type: 'doc', content: [{ type: 'paragraph' }] }),
+    })
+    .returning('id')
+    .executeTakeFirstOrThrow();
+  const post = await db
+    .insertInto('posts')
+    .values({
+      episode_id: published.id,
+      build_id: buildA.id,
+      author_id: users.follower.id,
+      kind: 'question',
+      state: 'open',
+      chapter_start_seconds: 0,
+      body: 'Which stands are those?',
+    })
+    .returning('id')
+    .executeTakeFirstOrThrow();
   return {
     ids: {
       buildA: buildA.id,
@@ -360,6 +439,7 @@ async function makeWorld(visibility: 'public' | 'unlisted' | 'private' = 'public
       figure: figure.id,
       photo: photo.id,
       receipt: receipt.id,
+      post: post.id,
     },
     slugs: { owner: ownerRow.handle, buildA: buildA.slug, draft: draft.slug },
     clients,

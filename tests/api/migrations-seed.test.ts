@@ -100,7 +100,25 @@ describe('demo seed', () => {
     await runSeed(handle.db);
     expect(await snapshot()).toEqual(first);
     const runs = await handle.db.selectFrom('seed_runs').select(['section']).orderBy('section').execute();
-    expect(runs.map((r) => r.section)).toEqual(['demo-accounts', 'demo-builds', 'demo-figures', 'demo-parts']);
+    expect(runs.map((r) => r.section)).toEqual(['demo-accounts', 'demo-builds', 'demo-figures', 'demo-followers', 'demo-parts']);
+
+    // The followers issue's demo: posts in every state, replies, one adopted suggestion with its note,
+    // one reported post, follows and a few notices in the outbox; a third run adds nothing.
+    const followerRows = async () => ({
+      posts: await handle.db.selectFrom('posts').selectAll().orderBy('id').execute(),
+      follows: (await handle.db.selectFrom('follows').select('id').execute()).length,
+      reports: (await handle.db.selectFrom('post_reports').select('id').execute()).length,
+      notices: (await handle.db.selectFrom('outbox_messages').select('id').where('kind', 'like', 'notice-%').execute()).length,
+    });
+    const demo = await followerRows();
+    expect(new Set(demo.posts.map((p) => p.state).filter(Boolean))).toEqual(new Set(['open', 'answered', 'adopted', 'set-aside']));
+    expect(demo.posts.some((p) => p.kind === 'reply' && p.by_team)).toBe(true);
+    expect(demo.posts.some((p) => p.state === 'adopted' && p.adopted_note)).toBe(true);
+    expect(demo.reports).toBe(1);
+    expect(demo.follows).toBeGreaterThan(0);
+    expect(demo.notices).toBeGreaterThan(0);
+    await runSeed(handle.db);
+    expect(await followerRows()).toEqual(demo);
 
     // The parts issue's demo: reused and made lines with an avoided cost, lines on order tied to open items,
     // a line in another currency, a part sold off, per-system budgets with one system over its budget.

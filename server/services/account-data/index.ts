@@ -2,11 +2,18 @@ import type { Db } from '../../db/kysely';
 import { HttpError } from '../../http/http-error';
 import { buildsSection } from './builds-section';
 import { mediaSection } from './media-section';
+import { postsSection } from './posts-section';
 import type { AccountDataSection } from './section';
 import { accountSection, membershipsSection } from './sections';
 
 /** Every section of an account's data; later features append theirs. Erased in reverse order. */
-export const accountDataSections: readonly AccountDataSection[] = [accountSection, membershipsSection, buildsSection, mediaSection];
+export const accountDataSections: readonly AccountDataSection[] = [
+  accountSection,
+  membershipsSection,
+  buildsSection,
+  mediaSection,
+  postsSection,
+];
 
 /** "Download my data": one JSON document with a part per section. */
 export async function exportAccountData(db: Db, userId: number): Promise<Record<string, unknown>> {

@@ -182,5 +182,21 @@ export const workbench = z.object({
       }),
     )
     .default([]),
+  /** Posts on the creator's builds that no one of the build team has replied to yet, newest first. */
+  unansweredPosts: z
+    .array(
+      z.object({
+        id: z.number().int(),
+        kind: z.enum(['question', 'suggestion']),
+        excerpt: z.string(),
+        authorName: z.string(),
+        createdAt: z.string(),
+        buildTitle: z.string(),
+        episodeNumber: z.number().int(),
+      }),
+    )
+    .default([]),
+  /** Open questions and suggestions across the creator's builds. */
+  openPostCount: z.number().int().default(0),
 });
 export type Workbench = z.infer<typeof workbench>;

@@ -9,7 +9,19 @@ type Chapter = EpisodeReading['chapters'][number];
  * strip that scrolls sideways on a phone. Each entry jumps to its chapter (the address carries the
  * moment, `#at-312`); the active one is filled oxide.
  */
-export function ChapterRail({ chapters, active }: { chapters: readonly Chapter[]; active: number | null }) {
+export function ChapterRail({
+  chapters,
+  active,
+  postCounts,
+  adopted,
+}: {
+  chapters: readonly Chapter[];
+  active: number | null;
+  /** Posts per chapter (same order), shown at the right of each entry. */
+  postCounts?: readonly number[];
+  /** Per chapter, the notes of adopted suggestions: a gauge mark with the note. */
+  adopted?: ReadonlyArray<readonly string[]>;
+}) {
   if (!chapters.length) return null;
   const current = active !== null ? chapters[active] : chapters[0];
   return (
@@ -33,7 +45,17 @@ export function ChapterRail({ chapters, active }: { chapters: readonly Chapter[]
               >
                 <span className="mr-2 font-mono text-[13px] text-oxide-2">{formatTime(c.startSeconds)}</span>
                 {c.title}
+                {postCounts?.[i] ? (
+                  <span className="ml-2 font-condensed text-[13px] font-medium tracking-[0.06em] text-slate uppercase lg:float-right">
+                    {postCounts[i]} post{postCounts[i] === 1 ? '' : 's'}
+                  </span>
+                ) : null}
               </a>
+              {adopted?.[i]?.length ? (
+                <p className="hidden px-2.5 pb-1 text-[13px] text-gauge lg:block lg:pl-4">
+                  <span className="font-condensed font-semibold tracking-[0.1em] uppercase">✓ Adopted:</span> {adopted[i]!.join(' · ')}
+                </p>
+              ) : null}
             </li>
           );
         })}

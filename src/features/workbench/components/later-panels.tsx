@@ -4,12 +4,42 @@ import { formatMinor } from '../../../shared/money';
 import type { Workbench } from '../../../shared/schemas/episodes';
 import { workbenchPaths } from '../paths';
 
-/** The posts panel is filled by the followers issue; until then it says what will show there. */
-export function UnansweredPostsPanel() {
+/** Posts on the creator's builds that wait for a reply from the build team, newest first; the inbox has them all. */
+export function UnansweredPostsPanel({ posts, openCount }: { posts: Workbench['unansweredPosts']; openCount: number }) {
+  if (!posts.length)
+    return (
+      <StateMessage kind="empty" title="No unanswered posts.">
+        <p>Questions and suggestions from readers that wait for an answer from the build team show here.</p>
+        {openCount ? (
+          <p>
+            {openCount} still open in the{' '}
+            <Link to="/inbox" className="underline underline-offset-2">
+              inbox
+            </Link>
+            .
+          </p>
+        ) : null}
+      </StateMessage>
+    );
   return (
-    <StateMessage kind="empty" title="No unanswered posts.">
-      <p>Questions and suggestions from readers that wait for an answer from the build team show here.</p>
-    </StateMessage>
+    <>
+      <ul className="divide-y divide-rule border-y border-rule">
+        {posts.map((p) => (
+          <li key={p.id} className="py-2.5">
+            <span className="block text-[14px] text-slate">
+              {p.kind === 'question' ? 'Question' : 'Suggestion'} from {p.authorName} · {p.buildTitle} · ep. {p.episodeNumber}
+            </span>
+            <span className="block">{p.excerpt}</span>
+          </li>
+        ))}
+      </ul>
+      <p className="mt-2">
+        <Link to="/inbox" className="underline underline-offset-2">
+          Answer in the inbox
+        </Link>{' '}
+        · {openCount} open
+      </p>
+    </>
   );
 }
 

@@ -1,0 +1,36 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { ApiClient } from '../../../lib/api-client';
+import { useApi } from '../../../lib/api-context';
+import { followingResponse, noticePreferences, notificationsResponse } from '../../../shared/schemas/following';
+import { followingKeys } from './keys';
+
+export function followingOptions(api: ApiClient) {
+  return queryOptions({
+    queryKey: followingKeys.following(),
+    queryFn: ({ signal }) => api.get('/api/following', followingResponse, signal),
+  });
+}
+export function useFollowing(enabled = true) {
+  return useQuery({ ...followingOptions(useApi()), enabled });
+}
+
+export function notificationsOptions(api: ApiClient) {
+  return queryOptions({
+    queryKey: followingKeys.notifications(),
+    queryFn: ({ signal }) => api.get('/api/notifications', notificationsResponse, signal),
+  });
+}
+/** Notifications, refreshed each minute while a page is open (the header's count). */
+export function useNotifications(enabled = true) {
+  return useQuery({ ...notificationsOptions(useApi()), enabled, refetchInterval: 60_000 });
+}
+
+export function noticePreferencesOptions(api: ApiClient) {
+  return queryOptions({
+    queryKey: followingKeys.preferences(),
+    queryFn: ({ signal }) => api.get('/api/account/notices', noticePreferences, signal),
+  });
+}
+export function useNoticePreferences() {
+  return useQuery(noticePreferencesOptions(useApi()));
+}
