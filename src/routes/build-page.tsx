@@ -4,7 +4,10 @@ import { DateText } from '../components/ui/date-text';
 import { clipDescription, PageMeta } from '../components/ui/page-meta';
 import { Plate } from '../components/ui/plate';
 import { StateMessage } from '../components/ui/state-message';
+import { useSession } from '../features/accounts/api/get-session';
+import { accountPaths } from '../features/accounts/paths';
 import { formatHours } from '../features/builds/lib/hours';
+import { FollowButtons } from '../features/following/components/follow-buttons';
 import { formatMoney } from '../features/builds/lib/money';
 import { formatMinor } from '../shared/money';
 import type { BuildTotals } from '../shared/schemas/parts';
@@ -52,6 +55,7 @@ export function BuildPage() {
 }
 
 function Build({ build }: { build: BuildOverview }) {
+  const session = useSession();
   const canonical = paths.build(build.owner.handle, build.slug);
   const vehicle = vehicleLine(build);
   const description = clipDescription(build.summary ?? `${vehicle} restored on camera by ${build.owner.displayName}, episode by episode.`);
@@ -98,6 +102,15 @@ function Build({ build }: { build: BuildOverview }) {
             </>
           ) : null}
         </p>
+        <FollowButtons
+          signedIn={!!session.data?.account}
+          buildId={build.id}
+          buildTitle={build.title}
+          creatorHandle={build.owner.handle}
+          creatorName={build.owner.displayName}
+          signInPath={accountPaths.signIn(canonical)}
+          showCreator={session.data?.account?.handle !== build.owner.handle}
+        />
       </header>
 
       <dl className="mt-6 grid grid-cols-2 border border-rule bg-card sm:grid-cols-4">
