@@ -3,11 +3,11 @@ import pLimit from 'p-limit';
 import sharp from 'sharp';
 import { MAX_PIXELS, type Inspected } from './inspect';
 
-// One libvips thread per image and at most two images at once: four uploads together wait their
+// One libvips thread and one image at a time: four uploads together wait their
 // turn instead of decoding four 12-megapixel photos side by side (memory, see `npm run bench:media`).
 sharp.concurrency(1);
 sharp.cache(false);
-const limit = pLimit(2);
+const limit = pLimit(1);
 
 /** Widths of the WebP variants; never wider than the original (no upscaling). */
 export const VARIANT_WIDTHS = [320, 960, 1920] as const;
