@@ -13,3 +13,10 @@ export function createQueryClient(): QueryClient {
     },
   });
 }
+
+/**
+ * `meta` for queries only a signed-in person can make (their notifications, what they follow). On
+ * sign-out the session change removes them before anything refetches (features/accounts
+ * session-change), so a header still on screen never asks again with a session that has ended.
+ */
+export const SIGNED_IN_ONLY = { signedInOnly: true } as const;

@@ -13,6 +13,9 @@ const notSession = (query: { queryKey: readonly unknown[] }) => query.queryKey[0
  */
 export function applySessionChange(queryClient: QueryClient, api: ApiClient, account: Account | null): void {
   api.forgetCsrfToken();
+  // Answers only a signed-in person can have go before anything refetches: on screen they would
+  // otherwise ask once more with the old (now signed-out) session and get 401.
+  if (!account) queryClient.removeQueries({ predicate: (q) => q.meta?.signedInOnly === true });
   queryClient.setQueryData(sessionOptions(api).queryKey, { account });
   queryClient.removeQueries({ type: 'inactive', predicate: notSession });
   void queryClient.invalidateQueries({ predicate: notSession });

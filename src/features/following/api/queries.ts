@@ -2,12 +2,14 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { ApiClient } from '../../../lib/api-client';
 import { useApi } from '../../../lib/api-context';
 import { followingResponse, noticePreferences, notificationsResponse } from '../../../shared/schemas/following';
+import { SIGNED_IN_ONLY } from '../../../lib/query-client';
 import { followingKeys } from './keys';
 
 export function followingOptions(api: ApiClient) {
   return queryOptions({
     queryKey: followingKeys.following(),
     queryFn: ({ signal }) => api.get('/api/following', followingResponse, signal),
+    meta: SIGNED_IN_ONLY,
   });
 }
 export function useFollowing(enabled = true) {
@@ -18,6 +20,7 @@ export function notificationsOptions(api: ApiClient) {
   return queryOptions({
     queryKey: followingKeys.notifications(),
     queryFn: ({ signal }) => api.get('/api/notifications', notificationsResponse, signal),
+    meta: SIGNED_IN_ONLY,
   });
 }
 /** Notifications, refreshed each minute while a page is open (the header's count). */
