@@ -1,5 +1,5 @@
 import { Link, useLoaderData } from 'react-router';
-import { Button } from '../components/ui/button';
+import { QueryState } from '../components/ui/query-state';
 import { DateText } from '../components/ui/date-text';
 import { clipDescription, PageMeta } from '../components/ui/page-meta';
 import { Plate } from '../components/ui/plate';
@@ -38,18 +38,14 @@ export function BuildPage() {
   const { buildId } = useLoaderData<{ buildId: number }>();
   const { data, error, refetch, isFetching } = useBuildOverview(buildId);
   if (!data)
-    return error ? (
-      <StateMessage
-        kind="error"
-        title="This build could not be loaded."
-        action={
-          <Button onClick={() => void refetch()} disabled={isFetching}>
-            Try again
-          </Button>
-        }
+    return (
+      <QueryState
+        error={error}
+        isFetching={isFetching}
+        refetch={refetch}
+        errorTitle="This build could not be loaded."
+        loadingTitle="Loading the build…"
       />
-    ) : (
-      <StateMessage kind="loading" title="Loading the build…" />
     );
   return <Build build={data} />;
 }

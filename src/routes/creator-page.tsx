@@ -1,5 +1,5 @@
 import { useParams } from 'react-router';
-import { Button } from '../components/ui/button';
+import { QueryState } from '../components/ui/query-state';
 import { clipDescription, PageMeta } from '../components/ui/page-meta';
 import { StateMessage } from '../components/ui/state-message';
 import { EpisodeCard } from '../features/episodes/components/episode-card';
@@ -22,18 +22,14 @@ export function CreatorPage() {
   const handle = useParams().handle ?? '';
   const { data, error, refetch, isFetching } = useCreator(handle);
   if (!data)
-    return error ? (
-      <StateMessage
-        kind="error"
-        title="This page could not be loaded."
-        action={
-          <Button onClick={() => void refetch()} disabled={isFetching}>
-            Try again
-          </Button>
-        }
+    return (
+      <QueryState
+        error={error}
+        isFetching={isFetching}
+        refetch={refetch}
+        errorTitle="This page could not be loaded."
+        loadingTitle="Loading…"
       />
-    ) : (
-      <StateMessage kind="loading" title="Loading…" />
     );
   return <Creator creator={data} />;
 }

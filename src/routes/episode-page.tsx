@@ -1,6 +1,6 @@
 import { useEffect, useState } from 'react';
 import { Link, useLoaderData } from 'react-router';
-import { Button } from '../components/ui/button';
+import { QueryState } from '../components/ui/query-state';
 import { CautionBar } from '../components/ui/caution-bar';
 import { DateText } from '../components/ui/date-text';
 import { clipDescription, PageMeta } from '../components/ui/page-meta';
@@ -50,18 +50,14 @@ export function EpisodePage() {
   const { episodeId } = useLoaderData<{ episodeId: number }>();
   const { data, error, refetch, isFetching } = useEpisodeReading(episodeId);
   if (!data)
-    return error ? (
-      <StateMessage
-        kind="error"
-        title="This episode could not be loaded."
-        action={
-          <Button onClick={() => void refetch()} disabled={isFetching}>
-            Try again
-          </Button>
-        }
+    return (
+      <QueryState
+        error={error}
+        isFetching={isFetching}
+        refetch={refetch}
+        errorTitle="This episode could not be loaded."
+        loadingTitle="Loading the episode…"
       />
-    ) : (
-      <StateMessage kind="loading" title="Loading the episode…" />
     );
   return <Episode episode={data} />;
 }
