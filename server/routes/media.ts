@@ -2,15 +2,26 @@ import type { Request, Response } from 'express';
 import multer from 'multer';
 import { z } from 'zod';
 import { idParam } from '../../src/shared/schemas/accounts';
-import { mediaAltUpdate, mediaUploadFields, type MediaItem } from '../../src/shared/schemas/media';
+import {
+  buildCoverUpdate,
+  buildPhotosQuery,
+  episodePicturesUpdate,
+  mediaAltUpdate,
+  mediaUploadFields,
+  type BuildCover,
+  type BuildPhotosResponse,
+  type EpisodePictures,
+  type MediaItem,
+} from '../../src/shared/schemas/media';
 import type { AppDeps } from '../app-deps';
 import { signedIn } from '../auth/policy';
-import { buildResource, mediaResource } from '../auth/resources';
+import { buildResource, episodeResource, mediaResource } from '../auth/resources';
 import { HttpError } from '../http/http-error';
 import { parse } from '../http/parse';
 import { defineRoute } from '../http/registry';
 import { presentMedia } from '../presenters/media';
 import { MAX_UPLOAD_BYTES } from '../services/media/inspect';
+import { buildCoverRow, episodePictureRows, listBuildPhotos, setBuildCover, setEpisodePictures } from '../services/media/pictures';
 import { deleteMedia, storeUpload } from '../services/media/store';
 
 // Into memory, one file per request, small text fields: nothing ever lands in a public folder.
@@ -129,6 +140,71 @@ export const mediaRoutes = [
         .setHeader('cache-control', 'private, no-store')
         .setHeader('x-content-type-options', 'nosniff')
         .send(bytes);
+    },
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/builds/:buildId/photos',
+    summary: "The build's photos, newest first, to choose covers and gallery pictures from",
+    action: 'build.team.read',
+    params: z.object({ buildId: idParam }),
+    query: buildPhotosQuery,
+    resource: buildResource,
+    handler: async ({ deps, params, query }): Promise<BuildPhotosResponse> => {
+      const { rows, total } = await listBuildPhotos(deps.db, params.buildId, query);
+      return { items: rows.map(presentMedia), page: query.page, perPage: query.perPage, total };
+    },
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/builds/:buildId/cover',
+    summary: "The build's cover photo, as the owner edits it",
+    action: 'build.team.read',
+    params: z.object({ buildId: idParam }),
+    resource: buildResource,
+    handler: async ({ deps, params }): Promise<BuildCover> => {
+      const row = await buildCoverRow(deps.db, params.buildId);
+      return { cover: row ? presentMedia(row) : null };
+    },
+  }),
+  defineRoute({
+    method: 'put',
+    path: '/builds/:buildId/cover',
+    summary: "Choose or clear the build's cover (one of its photos, described)",
+    action: 'build.manage',
+    params: z.object({ buildId: idParam }),
+    body: buildCoverUpdate,
+    resource: buildResource,
+    handler: async ({ deps, params, body }): Promise<BuildCover> => {
+      await setBuildCover(deps.db, params.buildId, body.coverMediaId);
+      const row = await buildCoverRow(deps.db, params.buildId);
+      return { cover: row ? presentMedia(row) : null };
+    },
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/episodes/:episodeId/pictures',
+    summary: "The episode's cover and gallery, as the build team edits them",
+    action: 'episode.write',
+    params: z.object({ episodeId: idParam }),
+    resource: episodeResource,
+    handler: async ({ deps, params }): Promise<EpisodePictures> => {
+      const { cover, gallery } = await episodePictureRows(deps.db, params.episodeId);
+      return { cover: cover ? presentMedia(cover) : null, gallery: gallery.map(presentMedia) };
+    },
+  }),
+  defineRoute({
+    method: 'put',
+    path: '/episodes/:episodeId/pictures',
+    summary: "Set the episode's cover and its gallery (in order)",
+    action: 'episode.write',
+    params: z.object({ episodeId: idParam }),
+    body: episodePicturesUpdate,
+    resource: episodeResource,
+    handler: async ({ deps, params, body }): Promise<EpisodePictures> => {
+      await setEpisodePictures(deps.db, params.episodeId, body);
+      const { cover, gallery } = await episodePictureRows(deps.db, params.episodeId);
+      return { cover: cover ? presentMedia(cover) : null, gallery: gallery.map(presentMedia) };
     },
   }),
 ];

@@ -30,21 +30,35 @@ const chaptersInOrder: PublishCheck = (ctx) =>
     message: p.message,
   }));
 
-/** Every picture readers will see needs its words for people who cannot see it (the media issue). */
+/** Every picture readers will see — in the write-up, as the cover, in the gallery — needs its words for people who cannot see it. */
 const picturesHaveAltText: PublishCheck = async (ctx, db) => {
-  const ids = writeUpImageIds(ctx.writeUp);
-  if (!ids.length) return [];
-  const rows = await db.selectFrom('media').select(['id', 'alt_text']).where('id', 'in', ids).execute();
-  const alt = new Map(rows.map((r) => [r.id, r.alt_text?.trim() ?? '']));
-  const missing = ids.filter((id) => !alt.get(id));
-  return missing.length
-    ? [
-        {
-          field: 'writeUp',
-          message: `Describe ${missing.length === 1 ? 'the picture' : `${missing.length} pictures`} in the write-up (alt text) before publishing`,
-        },
-      ]
-    : [];
+  const inText = writeUpImageIds(ctx.writeUp);
+  const around = await db
+    .selectFrom('media as m')
+    .leftJoin('episode_gallery as g', (j) => j.onRef('g.media_id', '=', 'm.id').on('g.episode_id', '=', ctx.episodeId))
+    .leftJoin('episodes as e', (j) => j.onRef('e.cover_media_id', '=', 'm.id').on('e.id', '=', ctx.episodeId))
+    .select(['m.id', 'm.alt_text', 'g.position', 'e.id as cover_of'])
+    .where((eb) =>
+      eb.or([eb('g.episode_id', 'is not', null), eb('e.id', 'is not', null), ...(inText.length ? [eb('m.id', 'in', inText)] : [])]),
+    )
+    .execute();
+  const undescribed = new Set(around.filter((r) => !r.alt_text?.trim()).map((r) => r.id));
+  const problems: PublishProblem[] = [];
+  const inWriteUp = inText.filter((id) => undescribed.has(id) || !around.some((r) => r.id === id));
+  if (inWriteUp.length)
+    problems.push({
+      field: 'writeUp',
+      message: `Describe ${inWriteUp.length === 1 ? 'the picture' : `${inWriteUp.length} pictures`} in the write-up (alt text) before publishing`,
+    });
+  if (around.some((r) => r.cover_of !== null && undescribed.has(r.id)))
+    problems.push({ field: 'cover', message: 'Describe the cover picture (alt text) before publishing' });
+  const gallery = around.filter((r) => r.position !== null && undescribed.has(r.id)).length;
+  if (gallery)
+    problems.push({
+      field: 'gallery',
+      message: `Describe ${gallery === 1 ? 'the gallery picture' : `${gallery} gallery pictures`} (alt text) before publishing`,
+    });
+  return problems;
 };
 
 /** Every publish rule; later features add theirs here (the sponsors' disclosure rule, for one). */

@@ -8,6 +8,8 @@ import { listLatestEpisodes } from '../db/episodes.queries';
 import { figureSystemKeys } from './figures';
 import type { Db } from '../db/kysely';
 import { presentEpisodeListItem } from '../presenters/episodes';
+import { presentImage } from '../presenters/media';
+import { buildCoverRow, episodePictureRows } from './media/pictures';
 
 const iso = (d: Date | string | null): string | null => (d === null ? null : new Date(d).toISOString());
 const hours = (minutes: number | null): number | null => (minutes === null ? null : minutes / 60);
@@ -52,7 +54,8 @@ export async function getBuildOverview(db: Db, buildId: number): Promise<BuildOv
     .where('b.id', '=', buildId)
     .executeTakeFirst();
   if (!b) return null;
-  const [editors, systems, episodes, openItems] = await Promise.all([
+  const [cover, editors, systems, episodes, openItems] = await Promise.all([
+    buildCoverRow(db, buildId),
     db
       .selectFrom('build_members as m')
       .innerJoin('users as u', 'u.id', 'm.user_id')
@@ -116,6 +119,7 @@ export async function getBuildOverview(db: Db, buildId: number): Promise<BuildOv
     currency: b.currency,
     budgetMinor: b.budget_minor,
     owner: { handle: b.handle, displayName: b.display_name },
+    cover: presentImage(cover),
     editors: editors.map((e) => ({ handle: e.handle, displayName: e.display_name })),
     systems: systems.map((s) => ({ key: s.key, name: s.name, safetyCritical: s.safety_critical })),
     hoursWorked: episodes.reduce((sum, e) => sum + (e.minutes_worked ?? 0), 0) / 60,
@@ -183,7 +187,7 @@ export async function getEpisodeReading(db: Db, episodeId: number): Promise<Epis
       .orderBy('e.number', dir === 'previous' ? 'desc' : 'asc')
       .limit(1)
       .executeTakeFirst();
-  const [chapters, systems, previous, next, opened, closed, partSystems, figureKeys] = await Promise.all([
+  const [chapters, systems, previous, next, opened, closed, partSystems, figureKeys, pictures] = await Promise.all([
     db.selectFrom('chapters').selectAll().where('episode_id', '=', episodeId).orderBy('position').execute(),
     db
       .selectFrom('build_systems')
@@ -223,6 +227,7 @@ export async function getEpisodeReading(db: Db, episodeId: number): Promise<Epis
       .where('system_key', 'is not', null)
       .execute(),
     figureSystemKeys(db, episodeId),
+    episodePictureRows(db, episodeId),
   ]);
   const systemList = systems.map((s) => ({ key: s.key, name: s.name, safetyCritical: s.safety_critical }));
   const byKey = new Map(systemList.map((s) => [s.key, s]));
@@ -247,6 +252,8 @@ export async function getEpisodeReading(db: Db, episodeId: number): Promise<Epis
     durationSeconds: e.duration_seconds,
     hoursWorked: hours(e.minutes_worked),
     writeUpHtml: e.write_up_html,
+    cover: presentImage(pictures.cover),
+    gallery: pictures.gallery.flatMap((m) => presentImage(m) ?? []),
     chapters: chapters.map((c, i) => ({
       id: c.id,
       startSeconds: c.start_seconds,

@@ -226,6 +226,11 @@ const matrix: Record<string, { request: (w: World) => { path: string; body?: unk
   'PATCH /media/:mediaId': { request: (w) => ({ path: `/api/media/${w.ids.photo}`, body: {} }), expect: teamOnly(400) },
   'DELETE /media/:mediaId': { request: (w) => ({ path: `/api/media/${w.ids.photo}` }), expect: teamOnly(204), freshWorldPerActor: true },
   'GET /media/:mediaId/download': { request: (w) => ({ path: `/api/media/${w.ids.receipt}/download` }), expect: draftTeam(200) },
+  'GET /builds/:buildId/photos': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}/photos` }), expect: teamOnly(200) },
+  'GET /builds/:buildId/cover': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}/cover` }), expect: teamOnly(200) },
+  'PUT /builds/:buildId/cover': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}/cover`, body: {} }), expect: ownerOnly(400) },
+  'GET /episodes/:episodeId/pictures': { request: (w) => ({ path: `/api/episodes/${w.ids.draft}/pictures` }), expect: draftTeam(200) },
+  'PUT /episodes/:episodeId/pictures': { request: (w) => ({ path: `/api/episodes/${w.ids.draft}/pictures`, body: {} }), expect: draftTeam(400) },
   'POST /admin/suppliers/:supplierId/merge': {
     request: () => ({ path: '/api/admin/suppliers/1/merge', body: {} }),
     expect: adminOnly(400),

@@ -312,6 +312,107 @@ describe('pictures in the write-up', () => {
   });
 });
 
+describe('covers and the episode gallery', () => {
+  it('sets an episode cover and gallery from the build’s photos, asks for alt text, and shows them to readers', async () => {
+    const db = app.deps.db;
+    const e = await db
+      .insertInto('episodes')
+      .values({
+        build_id: buildId,
+        number: 70,
+        slug: 'gallery',
+        title: 'Gallery',
+        status: 'draft',
+        write_up: JSON.stringify({ type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text: 'Sanded.' }] }] }),
+      })
+      .returning(['id', 'version'])
+      .executeTakeFirstOrThrow();
+    const png = (colour: string) =>
+      sharp({ create: { width: 800, height: 600, channels: 3, background: colour } })
+        .png()
+        .toBuffer();
+    const a = await upload(owner, await png('#224466'), 'a.png', { altText: 'Door skin after sanding' });
+    const b = await upload(owner, await png('#664422'), 'b.png');
+    const foreign = await upload(owner, await png('#446622'), 'c.png', { altText: 'Elsewhere' }, privateBuildId);
+    await app.runJobs();
+
+    // The build's photos list has both, newest first; receipts are not photos.
+    const photos = await owner.get(`/api/builds/${buildId}/photos?perPage=60`);
+    expect(photos.status).toBe(200);
+    const ids = photos.body.items.map((m: { id: number }) => m.id);
+    expect(ids).toEqual(expect.arrayContaining([a.body.id, b.body.id]));
+    expect(ids).not.toContain(foreign.body.id);
+    expect(photos.body.items.every((m: { kind: string }) => m.kind === 'photo')).toBe(true);
+
+    // Another build's photo, a duplicate and a non-number are refused, naming the field; nothing changes.
+    const bad = await owner.put(`/api/episodes/${e.id}/pictures`, { coverMediaId: foreign.body.id, gallery: [a.body.id, a.body.id] });
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.body.error.fields)).toEqual(['gallery.1']);
+    const bad2 = await owner.put(`/api/episodes/${e.id}/pictures`, { coverMediaId: foreign.body.id, gallery: [a.body.id] });
+    expect(bad2.status).toBe(400);
+    expect(Object.keys(bad2.body.error.fields)).toEqual(['coverMediaId']);
+    expect((await owner.get(`/api/episodes/${e.id}/pictures`)).body).toEqual({ cover: null, gallery: [] });
+
+    // A draft may hold an undescribed picture; publishing then names it.
+    const set = await owner.put(`/api/episodes/${e.id}/pictures`, { coverMediaId: a.body.id, gallery: [b.body.id, a.body.id] });
+    expect(set.status).toBe(200);
+    expect(set.body.cover.id).toBe(a.body.id);
+    expect(set.body.gallery.map((m: { id: number }) => m.id)).toEqual([b.body.id, a.body.id]);
+    const refused = await owner.post(`/api/episodes/${e.id}/publish`, { version: e.version });
+    expect(refused.status).toBe(422);
+    expect(refused.body.error.fields).toHaveProperty('gallery');
+    expect(refused.body.error.fields).not.toHaveProperty('cover');
+
+    expect((await owner.patch(`/api/media/${b.body.id}`, { altText: 'Primer on the sill' })).status).toBe(200);
+    const published = await owner.post(`/api/episodes/${e.id}/publish`, { version: e.version });
+    expect(published.status).toBe(200);
+
+    // Once public, an undescribed picture is refused at once.
+    const c = await upload(owner, await png('#888888'), 'd.png');
+    const late = await owner.put(`/api/episodes/${e.id}/pictures`, { coverMediaId: a.body.id, gallery: [c.body.id] });
+    expect(late.status).toBe(400);
+    expect(late.body.error.fields['gallery.0'][0]).toMatch(/alt text/);
+
+    const reading = await follower.get(`/api/episodes/${e.id}/reading`);
+    expect(reading.status).toBe(200);
+    expect(reading.body.cover).toMatchObject({ id: a.body.id, alt: 'Door skin after sanding', width: 800, height: 600 });
+    expect(reading.body.cover.srcset).toMatch(/w320\.webp 320w, .*w800\.webp 800w$/);
+    expect(reading.body.gallery.map((g: { id: number; alt: string }) => [g.id, g.alt])).toEqual([
+      [b.body.id, 'Primer on the sill'],
+      [a.body.id, 'Door skin after sanding'],
+    ]);
+    // Followers cannot edit pictures; the chosen cover is also the front page card's picture.
+    expect((await follower.put(`/api/episodes/${e.id}/pictures`, { coverMediaId: null, gallery: [] })).status).toBe(403);
+    const card = (await follower.get('/api/episodes')).body.items.find((i: { id: number }) => i.id === e.id);
+    expect(card.coverUrl).toContain(`/files/${a.body.id}/`);
+
+    // Deleting a photo takes it out of the gallery and the cover.
+    expect((await owner.delete(`/api/media/${a.body.id}`)).status).toBe(204);
+    const after = await owner.get(`/api/episodes/${e.id}/pictures`);
+    expect(after.body.cover).toBeNull();
+    expect(after.body.gallery.map((m: { id: number }) => m.id)).toEqual([b.body.id]);
+  });
+
+  it('lets the owner choose a described photo as the build cover, shown on the build page', async () => {
+    const png = await sharp({ create: { width: 640, height: 480, channels: 3, background: '#335577' } })
+      .png()
+      .toBuffer();
+    const plain = await upload(owner, png, 'cover.png');
+    const refused = await owner.put(`/api/builds/${buildId}/cover`, { coverMediaId: plain.body.id });
+    expect(refused.status).toBe(400);
+    expect(refused.body.error.fields).toHaveProperty('coverMediaId');
+    expect((await owner.patch(`/api/media/${plain.body.id}`, { altText: 'The car under a dust sheet' })).status).toBe(200);
+    await app.runJobs();
+    const set = await owner.put(`/api/builds/${buildId}/cover`, { coverMediaId: plain.body.id });
+    expect(set.status).toBe(200);
+    expect(set.body.cover.id).toBe(plain.body.id);
+    const overview = await follower.get(`/api/builds/${buildId}/overview`);
+    expect(overview.body.cover).toMatchObject({ id: plain.body.id, alt: 'The car under a dust sheet', width: 640 });
+    expect((await owner.put(`/api/builds/${buildId}/cover`, { coverMediaId: null })).body).toEqual({ cover: null });
+    expect((await follower.get(`/api/builds/${buildId}/overview`)).body.cover).toBeNull();
+  });
+});
+
 describe('receipts on part lines', () => {
   it('attaches a receipt to a line, filters the ledger by it, and hides it from readers', async () => {
     const db = app.deps.db;

@@ -59,6 +59,10 @@ export class TestClient {
     return this.request<T>('PATCH', path, body, opts);
   }
   // eslint-disable-next-line @typescript-eslint/no-explicit-any -- response bodies are read loosely in tests
+  put<T = any>(path: string, body: unknown, opts?: { csrf?: boolean }) {
+    return this.request<T>('PUT', path, body, opts);
+  }
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- response bodies are read loosely in tests
   delete<T = any>(path: string, opts?: { csrf?: boolean }) {
     return this.request<T>('DELETE', path, undefined, opts);
   }

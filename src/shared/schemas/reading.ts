@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { VEHICLE_KINDS, VISIBILITIES } from './builds';
 import { pagedList, pageQuery } from './common';
 import { episodeListItem } from './episodes';
+import { imageRef } from './media';
 
 // The public side: what readers get on the builds directory, build, episode, creator and search pages.
 
@@ -58,6 +59,8 @@ export const buildOverview = z.object({
   currency: z.string(),
   budgetMinor: z.number().int().nullable(),
   owner: person,
+  /** The build's chosen cover photo, with its sizes; null when none is chosen. */
+  cover: imageRef.nullable(),
   editors: z.array(person),
   systems: z.array(z.object({ key: z.string(), name: z.string(), safetyCritical: z.boolean() })),
   /** Published episodes only. */
@@ -88,6 +91,10 @@ export const episodeReading = z.object({
   durationSeconds: z.number().int().nullable(),
   hoursWorked: z.number().nullable(),
   writeUpHtml: z.string(),
+  /** The episode's chosen cover photo, shown above the write-up; null when none is chosen. */
+  cover: imageRef.nullable(),
+  /** The episode's gallery, in the creator's order (photos whose sizes are ready). */
+  gallery: z.array(imageRef),
   chapters: z.array(
     z.object({
       id: z.number().int(),
