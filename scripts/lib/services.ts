@@ -4,7 +4,7 @@ import { writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { startAllFakes } from '../../fakes/all';
 import { migrateDatabase } from '../migrate';
-import { seedDatabase } from '../seed';
+import { seedDatabase, seedStorageFromEnv } from '../seed';
 import { ensureDatabase, startCluster } from './postgres';
 
 export interface LocalServices {
@@ -54,7 +54,9 @@ export async function startLocalServices(root: string, log: (msg: string) => voi
     for (const line of fakes.lines) log(line);
 
     for (const line of await migrateDatabase(databaseUrl)) log(`migrated ${line}`);
-    log(`seeded: ${(await seedDatabase(databaseUrl)).join(', ')}`);
+    // The demo photos go into the S3 fake just started, as uploads would.
+    const storage = seedStorageFromEnv({ ...env, S3_ENDPOINT: `http://127.0.0.1:${ports.s3}` });
+    log(`seeded: ${(await seedDatabase(databaseUrl, storage)).join(', ')}`);
 
     const github = `http://127.0.0.1:${ports.github}`;
     return {

@@ -1,11 +1,12 @@
 import { sql } from 'kysely';
 import type { Db } from '../db/kysely';
-import type { SeedSection } from './section';
+import type { SeedContext, SeedSection } from './section';
 import { demoAccountsSection } from './sections/demo-accounts';
 import { demoBuildsSection } from './sections/demo-builds';
 import { demoFiguresSection } from './sections/demo-figures';
 import { demoFollowersSection } from './sections/demo-followers';
 import { demoPartsSection } from './sections/demo-parts';
+import { demoPhotosSection } from './sections/demo-photos';
 
 /** Every demo-seed section, in the order they run (later sections may use earlier ones' rows). */
 export const seedSections: readonly SeedSection[] = [
@@ -14,14 +15,23 @@ export const seedSections: readonly SeedSection[] = [
   demoPartsSection,
   demoFiguresSection,
   demoFollowersSection,
+  demoPhotosSection,
 ];
 
-/** Runs every section in its own transaction; safe to run on every start. */
-export async function runSeed(db: Db, sections: readonly SeedSection[] = seedSections): Promise<string[]> {
+/**
+ * Runs every section in its own transaction; safe to run on every start. Without storage, sections
+ * that store files (demo photos) are left out.
+ */
+export async function runSeed(
+  db: Db,
+  sections: readonly SeedSection[] = seedSections,
+  ctx: SeedContext = { storage: null },
+): Promise<string[]> {
   const ran: string[] = [];
   for (const section of sections) {
+    if (section.needsStorage && !ctx.storage) continue;
     await db.transaction().execute(async (trx) => {
-      await section.run(trx);
+      await section.run(trx, ctx);
       await trx
         .insertInto('seed_runs')
         .values({ section: section.key, version: section.version })

@@ -2,6 +2,7 @@ import { Link, useLoaderData } from 'react-router';
 import { QueryState } from '../components/ui/query-state';
 import { DateText } from '../components/ui/date-text';
 import { clipDescription, PageMeta } from '../components/ui/page-meta';
+import { Picture } from '../components/ui/picture';
 import { Plate } from '../components/ui/plate';
 import { StateMessage } from '../components/ui/state-message';
 import { useSession } from '../features/accounts/api/get-session';
@@ -62,6 +63,7 @@ function Build({ build }: { build: BuildOverview }) {
         description={description}
         canonicalPath={canonical}
         noindex={build.visibility !== 'public'}
+        imagePath={build.cover?.src ?? null}
         feed={{ path: paths.feeds.build(build.id), title: `${build.title} — new episodes` }}
       />
       <nav aria-label="Breadcrumbs" className="font-condensed text-sm font-medium tracking-[0.08em] text-slate uppercase">
@@ -73,6 +75,11 @@ function Build({ build }: { build: BuildOverview }) {
           {build.title}
         </span>
       </nav>
+      {build.cover ? (
+        <figure className="mt-4 max-w-4xl">
+          <Picture image={build.cover} sizes="(min-width: 960px) 896px, 100vw" eager />
+        </figure>
+      ) : null}
       <header className="mt-4 max-w-measure">
         <p className="flex flex-wrap items-center gap-2 font-condensed text-[15px] font-semibold tracking-[0.14em] text-oxide uppercase">
           <Plate tone="slate">{VEHICLE_KIND_LABELS[build.vehicleKind]}</Plate>

@@ -6,6 +6,7 @@ import { useEditorBuild } from '../features/episode-editor/api/get-build';
 import { useEditorEpisode } from '../features/episode-editor/api/get-episode';
 import { useOpenItems } from '../features/episode-editor/api/get-open-items';
 import { EpisodeEditor } from '../features/episode-editor/components/episode-editor';
+import { EpisodePicturesPanel } from '../features/media/components/episode-pictures-panel';
 import { PartsPanel } from '../features/parts/components/editor/parts-panel';
 import { ApiError } from '../lib/api-client';
 import type { Build } from '../shared/schemas/builds';
@@ -81,7 +82,14 @@ function EditorScreen({ episodeId }: { episodeId: number }) {
       key={episode.id}
       episode={episode}
       build={build}
-      parts={build ? <EditorParts episode={episode} build={build} /> : null}
+      parts={
+        build ? (
+          <div className="space-y-10">
+            <EpisodePicturesPanel episodeId={episode.id} buildId={build.id} />
+            <EditorParts episode={episode} build={build} />
+          </div>
+        ) : null
+      }
     />
   );
 }

@@ -2,6 +2,7 @@ import { useEffect, useState } from 'react';
 import { Link, useLoaderData } from 'react-router';
 import { QueryState } from '../components/ui/query-state';
 import { CautionBar } from '../components/ui/caution-bar';
+import { Picture } from '../components/ui/picture';
 import { DateText } from '../components/ui/date-text';
 import { clipDescription, PageMeta } from '../components/ui/page-meta';
 import { Plate } from '../components/ui/plate';
@@ -113,6 +114,7 @@ function Episode({ episode }: { episode: EpisodeReading }) {
         canonicalPath={canonical}
         noindex={build.visibility !== 'public' || episode.status !== 'published'}
         ogType="article"
+        imagePath={episode.cover?.src ?? null}
         feed={{ path: paths.feeds.build(build.id), title: `${build.title} — new episodes` }}
       />
       <nav aria-label="Breadcrumbs" className="font-condensed text-sm font-medium tracking-[0.08em] text-slate uppercase">
@@ -196,9 +198,15 @@ function Episode({ episode }: { episode: EpisodeReading }) {
       <div className="mt-7 grid grid-cols-1 gap-6 lg:grid-cols-[240px_minmax(0,1fr)] lg:gap-10">
         <ChapterRail chapters={episode.chapters} active={active} postCounts={marks.counts} adopted={marks.adopted} />
         <div className="min-w-0">
+          {episode.cover ? (
+            <figure className="mb-6">
+              <Picture image={episode.cover} sizes="(min-width: 1024px) 720px, 100vw" eager />
+            </figure>
+          ) : null}
           <article aria-label="Write-up">
             <WriteUp html={episode.writeUpHtml} />
           </article>
+          <EpisodeGallery images={episode.gallery} />
           <ChapterSections chapters={episode.chapters} active={active} />
           <EpisodeParts episode={episode} />
           <div className="mt-10">
@@ -210,6 +218,29 @@ function Episode({ episode }: { episode: EpisodeReading }) {
         </div>
       </div>
     </>
+  );
+}
+
+function EpisodeGallery({ images }: { images: EpisodeReading['gallery'] }) {
+  if (!images.length) return null;
+  return (
+    <section aria-labelledby="gallery-heading" className="mt-10">
+      <h2 id="gallery-heading" className="label-condensed border-b-2 border-ink pb-2">
+        From the workshop <span className="font-mono font-normal text-slate">({images.length})</span>
+      </h2>
+      <ul className="mt-4 grid grid-cols-1 gap-4 sm:grid-cols-2">
+        {images.map((image) => (
+          <li key={image.id}>
+            <figure>
+              <a href={image.src} className="block">
+                <Picture image={image} sizes="(min-width: 640px) 360px, 100vw" />
+              </a>
+              <figcaption className="mt-1.5 text-[15px] text-ink-2">{image.alt}</figcaption>
+            </figure>
+          </li>
+        ))}
+      </ul>
+    </section>
   );
 }
 

@@ -11,6 +11,7 @@ import { BuildSettingsSummary } from '../features/builds/components/build-settin
 import { DeleteBuildSection } from '../features/builds/components/delete-build-section';
 import { TransferSection } from '../features/builds/components/transfer-section';
 import { buildValues, changedFields } from '../features/builds/lib/build-form';
+import { BuildCoverControl } from '../features/media/components/build-cover-control';
 import { workbenchPaths } from '../features/workbench/paths';
 import { DEFAULT_SYSTEMS, type Build } from '../shared/schemas/builds';
 import type { LoaderDeps } from './route-guards';
@@ -86,6 +87,8 @@ function OwnerSettings({ build }: { build: Build }) {
           }}
         />
       </section>
+
+      <BuildCoverControl buildId={build.id} />
 
       <section aria-labelledby="transfer-heading" className="max-w-2xl">
         <h2 id="transfer-heading" className="label-condensed mb-4 border-b-2 border-ink pb-2">

@@ -146,3 +146,62 @@ describe('demo seed', () => {
     expect(figures.some((f) => f.method === 'torque-angle' && f.angleStages.length > 0)).toBe(true);
   });
 });
+
+describe('demo photos', () => {
+  it('are stored like uploads (clean, with sizes) for covers, galleries and one receipt, once', async () => {
+    const { startS3Fake } = await import('../../fakes/s3');
+    const { createS3Storage } = await import('../../server/adapters/storage');
+    const { seedSections } = await import('../../server/seed');
+    const { ListObjectsV2Command, GetObjectCommand } = await import('@aws-sdk/client-s3');
+    const sharp = (await import('sharp')).default;
+    const { mkdtemp } = await import('node:fs/promises');
+    const os = await import('node:os');
+    const path = await import('node:path');
+    const s3 = await startS3Fake({ port: 0, directory: await mkdtemp(path.join(os.tmpdir(), 'rr-seed-s3-')), buckets: ['seed-photos'] });
+    const storage = createS3Storage({
+      S3_ENDPOINT: s3.url,
+      S3_REGION: 'us-east-1',
+      S3_BUCKET: 'seed-photos',
+      S3_ACCESS_KEY_ID: 'S3RVER',
+      S3_SECRET_ACCESS_KEY: 'S3RVER',
+      s3ForcePathStyle: true,
+    });
+    try {
+      await runSeed(handle.db, seedSections, { storage });
+      const media = await handle.db.selectFrom('media').selectAll().orderBy('id').execute();
+      const photos = media.filter((m) => m.kind === 'photo');
+      expect(photos.length).toBeGreaterThanOrEqual(8);
+      // Every photo is described, ready, and has its WebP sizes.
+      for (const p of photos) {
+        expect(p.alt_text?.length).toBeGreaterThan(10);
+        expect(p.status).toBe('ready');
+        expect((p.variants as Array<{ width: number }>).map((v) => v.width)).toEqual([320, 960, 1200]);
+      }
+      const builds = await handle.db.selectFrom('builds').select(['slug', 'cover_media_id']).execute();
+      expect(builds.every((b) => b.cover_media_id !== null)).toBe(true);
+      const gallery = await handle.db.selectFrom('episode_gallery').selectAll().execute();
+      expect(gallery.length).toBe(5);
+      const receipt = media.filter((m) => m.kind === 'receipt');
+      expect(receipt).toHaveLength(1);
+      expect(receipt[0]!.content_type).toBe('application/pdf');
+      const line = await handle.db.selectFrom('part_lines').select('description').where('receipt_media_id', '=', receipt[0]!.id).execute();
+      expect(line.map((l) => l.description)).toEqual(['Caliper seal kit, 48 mm']);
+
+      // The objects are there, and the stored originals carry no metadata at all.
+      const listed = await storage.client.send(new ListObjectsV2Command({ Bucket: 'seed-photos' }));
+      const keys = (listed.Contents ?? []).map((o) => o.Key);
+      for (const m of media) expect(keys).toContain(m.object_key);
+      const original = await storage.client.send(new GetObjectCommand({ Bucket: 'seed-photos', Key: photos[0]!.object_key }));
+      const meta = await sharp(Buffer.from(await original.Body!.transformToByteArray())).metadata();
+      expect(meta.exif).toBeUndefined();
+
+      // A second run adds nothing.
+      await runSeed(handle.db, seedSections, { storage });
+      expect(await handle.db.selectFrom('media').selectAll().orderBy('id').execute()).toEqual(media);
+      expect(await handle.db.selectFrom('episode_gallery').selectAll().execute()).toHaveLength(5);
+    } finally {
+      storage.close();
+      await s3.stop();
+    }
+  });
+});
