@@ -77,7 +77,7 @@ function Build({ build }: { build: BuildOverview }) {
       </nav>
       {build.cover ? (
         <figure className="mt-4 max-w-4xl">
-          <Picture image={build.cover} sizes="(min-width: 960px) 896px, 100vw" eager />
+          <Picture image={build.cover} sizes="(min-width: 960px) 896px, 100vw" eager className="aspect-[21/9] object-cover" />
         </figure>
       ) : null}
       <header className="mt-4 max-w-measure">

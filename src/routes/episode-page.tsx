@@ -200,7 +200,7 @@ function Episode({ episode }: { episode: EpisodeReading }) {
         <div className="min-w-0">
           {episode.cover ? (
             <figure className="mb-6">
-              <Picture image={episode.cover} sizes="(min-width: 1024px) 720px, 100vw" eager />
+              <Picture image={episode.cover} sizes="(min-width: 1024px) 840px, 100vw" eager className="aspect-video object-cover" />
             </figure>
           ) : null}
           <article aria-label="Write-up">

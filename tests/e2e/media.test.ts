@@ -104,4 +104,76 @@ describe('pictures in an episode', () => {
     expect(tracked.consoleErrors).toEqual([]);
     expectOnlyLoopback(tracked);
   });
+
+  it('chooses a cover and a gallery in the editor (upload with progress, describe, reorder), shown to readers', async () => {
+    const build = await client.post('/api/builds', {
+      title: '1958 Corran Wren pickup',
+      vehicleKind: 'car',
+      currency: 'EUR',
+      visibility: 'public',
+    });
+    const episode = await client.post(`/api/builds/${build.body.id}/episodes`, { title: 'Bed floor out' });
+    const id = episode.body.id as number;
+    const photo = (r: number) =>
+      sharp({ create: { width: 1000, height: 750, channels: 3, background: { r, g: 90, b: 60 } } })
+        .jpeg()
+        .toBuffer();
+    const page = await visit(tracked, `${app.baseUrl}/workbench/episodes/${id}/edit`);
+    await page.locator('.ProseMirror').click();
+    await page.keyboard.type('Cut out the old bed floor. ');
+    await saved(page);
+
+    // The cover: uploaded from the picker, which closes once the photo is stored.
+    await page.getByRole('button', { name: 'Choose a cover' }).click();
+    await page.getByLabel('Upload a photo').setInputFiles({ name: 'floor.jpg', mimeType: 'image/jpeg', buffer: await photo(200) });
+    await page.getByLabel('Describe the cover').waitFor({ timeout: 15_000 });
+    await page.getByLabel('Describe the cover').fill('The rusted bed floor before cutting');
+    await page.getByRole('button', { name: 'Save description' }).first().click();
+    await expect
+      .poll(async () => (await client.get(`/api/episodes/${id}/pictures`)).body.cover?.altText)
+      .toBe('The rusted bed floor before cutting');
+
+    // The gallery: two uploads at once, then the first moved down, each described.
+    await page.getByRole('button', { name: 'Add pictures to the gallery' }).click();
+    await page.getByLabel('Upload photos').setInputFiles([
+      { name: 'one.jpg', mimeType: 'image/jpeg', buffer: await photo(60) },
+      { name: 'two.jpg', mimeType: 'image/jpeg', buffer: await photo(120) },
+    ]);
+    await page.getByLabel('Describe gallery picture 2').waitFor({ timeout: 15_000 });
+    const before = (await client.get(`/api/episodes/${id}/pictures`)).body.gallery.map((m: { id: number }) => m.id);
+    expect(before).toHaveLength(2);
+    await page.getByRole('button', { name: 'Move down picture 1' }).click();
+    await expect
+      .poll(async () => (await client.get(`/api/episodes/${id}/pictures`)).body.gallery.map((m: { id: number }) => m.id))
+      .toEqual([before[1], before[0]]);
+    for (const [n, text] of [
+      [1, 'New floor panel offered up'],
+      [2, 'Old floor cut out along the seam'],
+    ] as const) {
+      await page.getByLabel(`Describe gallery picture ${n}`).fill(text);
+      await page
+        .getByRole('listitem')
+        .filter({ has: page.getByLabel(`Describe gallery picture ${n}`) })
+        .getByRole('button', { name: 'Save description' })
+        .click();
+      await expect.poll(async () => (await client.get(`/api/episodes/${id}/pictures`)).body.gallery[n - 1].altText).toBe(text);
+    }
+
+    await app.runJobs();
+    await page.getByRole('button', { name: 'Publish now' }).click();
+    await page.getByText(/Published\. Readers can see it now\./).waitFor();
+
+    const b = await app.deps.db.selectFrom('builds').select('slug').where('id', '=', build.body.id).executeTakeFirstOrThrow();
+    const e = await app.deps.db.selectFrom('episodes').select('slug').where('id', '=', id).executeTakeFirstOrThrow();
+    const reader = await visit(tracked, `${app.baseUrl}/builds/odile-farrant/${b.slug}/episodes/${e.slug}`);
+    const cover = reader.getByRole('img', { name: 'The rusted bed floor before cutting' });
+    expect(await cover.getAttribute('srcset')).toMatch(/w320\.webp 320w, .*w960\.webp 960w, .*w1000\.webp 1000w/);
+    const gallery = reader.getByRole('region', { name: /From the workshop/ });
+    expect(await gallery.getByRole('img').evaluateAll((els) => els.map((el) => el.getAttribute('alt')))).toEqual([
+      'New floor panel offered up',
+      'Old floor cut out along the seam',
+    ]);
+    expect(tracked.consoleErrors).toEqual([]);
+    expectOnlyLoopback(tracked);
+  });
 });

@@ -120,7 +120,9 @@ const PHOTOS: Record<string, DemoPhoto> = {
     draw: () =>
       svg(
         ground('#d9d4c6', '#9a7b5a') +
-          Array.from({ length: 9 }, (_, i) => `<rect x="380" y="${220 + i * 50}" width="440" height="26" rx="6" fill="#8c8f8f"/>`).join('') +
+          Array.from({ length: 9 }, (_, i) => `<rect x="380" y="${220 + i * 50}" width="440" height="26" rx="6" fill="#8c8f8f"/>`).join(
+            '',
+          ) +
           `<rect x="520" y="200" width="160" height="480" fill="#5e6162"/><ellipse cx="600" cy="200" rx="80" ry="24" fill="#2d2f30"/>`,
       ),
   },
@@ -257,21 +259,17 @@ export const demoPhotosSection: SeedSection = {
     if (!storage) return;
     const jpegs = new Map<string, Buffer>();
     const jpeg = async (name: string) => {
-      if (!jpegs.has(name))
-        jpegs.set(
-          name,
-          await sharp(PHOTOS[name]!.draw())
-            .jpeg({ quality: 85 })
-            .toBuffer(),
-        );
+      if (!jpegs.has(name)) jpegs.set(name, await sharp(PHOTOS[name]!.draw()).jpeg({ quality: 85 }).toBuffer());
       return jpegs.get(name)!;
     };
     for (const [slug, plan] of Object.entries(PLAN)) {
       const build = await trx.selectFrom('builds').select(['id', 'cover_media_id']).where('slug', '=', slug).executeTakeFirst();
       if (!build) continue;
-      const photo = async (name: string) => storeDemoFile(trx, storage, build.id, 'photo', await jpeg(name), `${PHOTOS[name]!.key}.jpg`, PHOTOS[name]!.alt);
+      const photo = async (name: string) =>
+        storeDemoFile(trx, storage, build.id, 'photo', await jpeg(name), `${PHOTOS[name]!.key}.jpg`, PHOTOS[name]!.alt);
       const cover = await photo(plan.cover);
-      if (build.cover_media_id === null) await trx.updateTable('builds').set({ cover_media_id: cover }).where('id', '=', build.id).execute();
+      if (build.cover_media_id === null)
+        await trx.updateTable('builds').set({ cover_media_id: cover }).where('id', '=', build.id).execute();
       for (const [number, pics] of Object.entries(plan.episodes)) {
         const episode = await trx
           .selectFrom('episodes')

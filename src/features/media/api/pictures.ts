@@ -1,13 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { ApiClient } from '../../../lib/api-client';
 import { useApi } from '../../../lib/api-context';
-import {
-  buildCover,
-  buildPhotosResponse,
-  episodePictures,
-  mediaItem,
-  type EpisodePicturesUpdate,
-} from '../../../shared/schemas/media';
+import { buildCover, buildPhotosResponse, episodePictures, mediaItem, type EpisodePicturesUpdate } from '../../../shared/schemas/media';
 
 /** Query keys of the media feature; every variable a fetcher uses is in its key. */
 export const mediaKeys = {

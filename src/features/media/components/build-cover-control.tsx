@@ -44,7 +44,11 @@ export function BuildCoverControl({ buildId }: { buildId: number }) {
       {isPending ? (
         <p className="mt-3 text-slate">Loading the cover…</p>
       ) : error ? (
-        <StateMessage kind="error" title="The cover could not be loaded." action={<Button onClick={() => void refetch()}>Try again</Button>}>
+        <StateMessage
+          kind="error"
+          title="The cover could not be loaded."
+          action={<Button onClick={() => void refetch()}>Try again</Button>}
+        >
           <p>{error.message}</p>
         </StateMessage>
       ) : data.cover ? (
@@ -84,12 +88,7 @@ export function BuildCoverControl({ buildId }: { buildId: number }) {
         />
       ) : null}
       {undescribed ? (
-        <DescribeThenChoose
-          media={undescribed}
-          pending={set.isPending}
-          onDone={(id) => choose(id)}
-          onCancel={() => setUndescribed(null)}
-        />
+        <DescribeThenChoose media={undescribed} pending={set.isPending} onDone={(id) => choose(id)} onCancel={() => setUndescribed(null)} />
       ) : null}
     </section>
   );

@@ -51,13 +51,13 @@ export function EpisodePicturesPanel({ episodeId, buildId }: { episodeId: number
     });
 
   return (
-    <section aria-labelledby={headingId} className="border-t-2 border-ink pt-4">
-      <h2 id={headingId} className="font-condensed text-xl font-semibold tracking-label uppercase">
+    <section aria-labelledby={headingId}>
+      <h2 id={headingId} className="label-condensed border-b-2 border-ink pb-2">
         Cover and gallery
       </h2>
-      <p className="mt-1 text-[15px] text-slate">
-        The cover sits above the write-up and on the episode’s card; the gallery follows the write-up. Describe each picture for
-        people who cannot see it — publishing asks for it.
+      <p className="mt-3 text-[15px] text-slate">
+        The cover sits above the write-up and on the episode’s card; the gallery follows the write-up. Describe each picture for people who
+        cannot see it — publishing asks for it.
       </p>
       {saveError ? (
         <p role="alert" className="mt-3 font-semibold text-oxide-2">
@@ -67,7 +67,11 @@ export function EpisodePicturesPanel({ episodeId, buildId }: { episodeId: number
       {isPending ? (
         <p className="mt-3 text-slate">Loading the episode’s pictures…</p>
       ) : error ? (
-        <StateMessage kind="error" title="The pictures could not be loaded." action={<Button onClick={() => void refetch()}>Try again</Button>}>
+        <StateMessage
+          kind="error"
+          title="The pictures could not be loaded."
+          action={<Button onClick={() => void refetch()}>Try again</Button>}
+        >
           <p>{error.message}</p>
         </StateMessage>
       ) : (
@@ -160,7 +164,9 @@ function PictureRow({ media, label, children }: { media: MediaItem; label: strin
       <PhotoThumb media={media} />
       <div className="min-w-0 flex-1 basis-64">
         {media.status === 'processing' ? <p className="text-[14px] text-slate">Making its sizes…</p> : null}
-        {media.status === 'failed' ? <p className="text-[14px] font-semibold text-oxide-2">Its sizes could not be made; the original is shown.</p> : null}
+        {media.status === 'failed' ? (
+          <p className="text-[14px] font-semibold text-oxide-2">Its sizes could not be made; the original is shown.</p>
+        ) : null}
         <DescribePhoto key={`${media.id}:${media.altText ?? ''}`} media={media} label={label} />
         <div className="mt-2 flex flex-wrap gap-2">{children}</div>
       </div>

@@ -101,7 +101,9 @@ export function PhotoPicker({
           <p>{photos.error.message}</p>
         </StateMessage>
       ) : offered.length === 0 ? (
-        <p className="mt-2 text-slate">{photos.data.total ? 'Every photo on this page is used here already.' : 'No photos yet: upload one above.'}</p>
+        <p className="mt-2 text-slate">
+          {photos.data.total ? 'Every photo on this page is used here already.' : 'No photos yet: upload one above.'}
+        </p>
       ) : (
         <ul className="mt-2 grid grid-cols-2 gap-3 sm:grid-cols-3 lg:grid-cols-4">
           {offered.map((m) => (

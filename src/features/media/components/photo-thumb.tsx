@@ -2,10 +2,7 @@ import type { MediaItem } from '../../../shared/schemas/media';
 
 /** A small view of a stored photo; while its sizes are made, the original (or a quiet block) stands in. */
 export function PhotoThumb({ media, className = 'h-20 w-28' }: { media: MediaItem; className?: string }) {
-  if (!media.src)
-    return (
-      <span aria-hidden="true" className={`${className} block shrink-0 border border-rule bg-paper-2`} />
-    );
+  if (!media.src) return <span aria-hidden="true" className={`${className} block shrink-0 border border-rule bg-paper-2`} />;
   return (
     <img
       src={media.src}
