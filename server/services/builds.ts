@@ -150,7 +150,11 @@ export async function getBuild(db: Db, buildId: number, viewerId: number | null)
     role: member?.role ?? null,
     hoursWorked: Number(stats.minutes) / 60,
     episodeCount: stats.n,
-    pendingTransferTo: b.pending_transfer_to ? { userId: b.pending_transfer_to, displayName: b.transfer_name ?? '' } : null,
+    // A hand-over in progress is the team's business and the recipient's, nobody else's.
+    pendingTransferTo:
+      b.pending_transfer_to && (member || viewerId === b.pending_transfer_to)
+        ? { userId: b.pending_transfer_to, displayName: b.transfer_name ?? '' }
+        : null,
     deletedAt: b.deleted_at?.toISOString() ?? null,
     createdAt: b.created_at.toISOString(),
     updatedAt: b.updated_at.toISOString(),

@@ -92,6 +92,10 @@ describe('builds', () => {
     expect((await owner.post(`/api/builds/${b.id}/transfer`, { toUserId: 999999 })).status).toBe(400);
     expect((await owner.post(`/api/builds/${b.id}/transfer`, { toUserId: editorId })).body.pendingTransferTo.userId).toBe(editorId);
     expect((await stranger.post(`/api/builds/${b.id}/transfer/accept`, {})).status).toBe(403);
+    // The hand-over in progress is shown to the team, not to readers of a public build.
+    expect((await editor.get(`/api/builds/${b.id}`)).body.pendingTransferTo.userId).toBe(editorId);
+    expect((await stranger.get(`/api/builds/${b.id}`)).body.pendingTransferTo).toBeNull();
+    expect((await visitor.get(`/api/builds/${b.id}`)).body.pendingTransferTo).toBeNull();
     const accepted = await editor.post(`/api/builds/${b.id}/transfer/accept`, {});
     expect(accepted.status).toBe(200);
     expect(accepted.body.role).toBe('owner');
