@@ -58,7 +58,8 @@ export async function spawnServerProcess(app: TestApp, opts: { timeoutMs?: numbe
   let done = false;
   void exited.then(() => (done = true));
 
-  const deadline = Date.now() + (opts.timeoutMs ?? 15_000);
+  // Generous: tsx compiles the server on start, which is slow on a busy 2-core machine.
+  const deadline = Date.now() + (opts.timeoutMs ?? 45_000);
   for (;;) {
     if (done) throw new Error(`server process exited before answering: ${stderr}`);
     try {
