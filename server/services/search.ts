@@ -77,7 +77,9 @@ export async function search(db: Db, q: string, page: number): Promise<SearchRes
            ts_headline('english', page.body, query.tsq, ${HEADLINE_OPTIONS}) as snippet
       from page cross join query
      order by page.rank desc, page.published_at desc nulls last, page.kind, page.id desc`.execute(db);
-  if (!rows.length) return empty;
+  // Past the last page there are no rows to carry the count: ask the first page for it (rare), so the
+  // page can say how many there are and link back.
+  if (!rows.length) return page > 1 ? { ...empty, total: (await search(db, q, 1)).total } : empty;
   return {
     q,
     page,

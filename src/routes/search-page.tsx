@@ -76,6 +76,16 @@ export function SearchPage() {
                 label="Pages of results"
               />
             </>
+          ) : data.total > 0 ? (
+            <StateMessage
+              kind="empty"
+              title={`There is no page ${data.page} of results for “${q}”.`}
+              action={
+                <Link to={paths.search(q, 1)} className={buttonClass('secondary')}>
+                  Back to the first page
+                </Link>
+              }
+            />
           ) : (
             <StateMessage kind="empty" title={`Nothing found for “${q}”.`}>
               <p>Try fewer or other words; quotes look for an exact phrase, and a minus sign leaves a word out.</p>

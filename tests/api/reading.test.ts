@@ -271,6 +271,9 @@ describe('search', () => {
     expect(fromWriteUp.body.total).toBe(1);
     expect(fromWriteUp.body.items[0].title).toBe('Rear drums and shoes');
     expect(fromWriteUp.body.items[0].snippet).toContain('\u0002zinctastic\u0003');
+    // Past the last page: no items, but the count is still there for "page 3 of 1" and a way back.
+    const past = await visitor.get('/api/search?q=zinctastic&page=3');
+    expect(past.body).toMatchObject({ items: [], total: 1, page: 3 });
     const fromChapter = await visitor.get('/api/search?q=quadrantfix');
     expect(fromChapter.body.items.map((h: { title: string }) => h.title)).toEqual(['Rear drums and shoes']);
     const build = await visitor.get('/api/search?q=Tollgate');
