@@ -28,6 +28,19 @@ export default mergeConfig(
         {
           extends: true,
           test: {
+            // Fault injection (PostgreSQL restarts, fakes stopped, SIGTERM): a cluster of their own,
+            // one file at a time, run by `npm test` as a step of its own (never beside other suites).
+            name: 'faults',
+            include: ['tests/faults/**/*.test.ts'],
+            globalSetup: ['tests/setup/faults-global.ts'],
+            testTimeout: 90_000,
+            hookTimeout: 90_000,
+            fileParallelism: false,
+          },
+        },
+        {
+          extends: true,
+          test: {
             name: 'e2e',
             include: ['tests/e2e/**/*.test.ts'],
             globalSetup: ['tests/setup/db-global.ts', 'tests/setup/build-global.ts'],
