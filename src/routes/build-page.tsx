@@ -175,7 +175,10 @@ function Build({ build }: { build: BuildOverview }) {
               <li key={o.id} className="border-[1.5px] border-dashed border-brass bg-card px-3 py-2 text-[15px]">
                 {o.title}
                 <small className="block text-[13px] text-slate">
-                  opened in <Link to={paths.episode(build.owner.handle, build.slug, o.openedIn.slug)}>episode {o.openedIn.number}</Link>
+                  opened in{' '}
+                  <Link className="underline" to={paths.episode(build.owner.handle, build.slug, o.openedIn.slug)}>
+                    episode {o.openedIn.number}
+                  </Link>
                   {o.note ? ` · ${o.note}` : ''}
                 </small>
               </li>
