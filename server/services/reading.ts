@@ -10,6 +10,7 @@ import { presentEpisodeListItem } from '../presenters/episodes';
 import { presentImage } from '../presenters/media';
 import { buildCoverRow } from './media/pictures';
 import { findEpisodeReading } from '../db/episode-reading.queries';
+import { buildSponsorCredits } from './sponsorships';
 
 const iso = (d: Date | string | null): string | null => (d === null ? null : new Date(d).toISOString());
 const hours = (minutes: number | null): number | null => (minutes === null ? null : minutes / 60);
@@ -54,7 +55,7 @@ export async function getBuildOverview(db: Db, buildId: number): Promise<BuildOv
     .where('b.id', '=', buildId)
     .executeTakeFirst();
   if (!b) return null;
-  const [cover, editors, systems, episodes, openItems] = await Promise.all([
+  const [cover, editors, systems, episodes, openItems, sponsors] = await Promise.all([
     buildCoverRow(db, buildId),
     db
       .selectFrom('build_members as m')
@@ -105,8 +106,10 @@ export async function getBuildOverview(db: Db, buildId: number): Promise<BuildOv
       .orderBy('e.number')
       .orderBy('o.id')
       .execute(),
+    buildSponsorCredits(db, buildId),
   ]);
   return {
+    sponsors,
     id: b.id,
     slug: b.slug,
     title: b.title,
