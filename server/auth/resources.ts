@@ -105,3 +105,9 @@ export async function postResource(deps: AppDeps, params: { postId: number }): P
       }
     : null;
 }
+
+/** The build a sponsorship (`:sponsorshipId`) belongs to. */
+export async function sponsorshipBuildResource(deps: AppDeps, params: { sponsorshipId: number }): Promise<Resource | null> {
+  const s = await deps.db.selectFrom('sponsorships').select('build_id').where('id', '=', params.sponsorshipId).executeTakeFirst();
+  return s ? buildResource(deps, { buildId: s.build_id }) : null;
+}

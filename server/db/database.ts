@@ -218,6 +218,8 @@ export interface EpisodesTable {
   version: Generated<number>;
   deleted_at: NullableTimestamp;
   cover_media_id: Generated<number | null>;
+  /** The creator confirmed that the video itself discloses the support too (sponsors issue). */
+  video_disclosure_confirmed: Generated<boolean>;
   created_at: Generated<Date>;
   updated_at: Generated<Date>;
 }
@@ -226,6 +228,29 @@ export interface SponsorsTable {
   id: Generated<number>;
   slug: string;
   name: string;
+  website: string | null;
+  logo_media_id: number | null;
+  created_at: Generated<Date>;
+  updated_at: Generated<Date>;
+}
+
+export type SupportKindColumn = 'gifted' | 'discounted' | 'paid';
+
+/** The suppliers an organisation stands behind (migration 2026-12-03_0700); a supplier has at most one. */
+export interface SponsorSuppliersTable {
+  sponsor_id: number;
+  supplier_id: number;
+  created_at: Generated<Date>;
+}
+
+/** A sponsor's support of a build for a time (DESIGN.md "sponsorship"). Dates are `date` columns, as YYYY-MM-DD strings. */
+export interface SponsorshipsTable {
+  id: Generated<number>;
+  build_id: number;
+  sponsor_id: number;
+  kind: SupportKindColumn;
+  starts_on: ColumnType<string, string, string>;
+  ends_on: ColumnType<string | null, string | null | undefined, string | null>;
   created_at: Generated<Date>;
   updated_at: Generated<Date>;
 }
@@ -304,6 +329,12 @@ export interface PartLinesTable {
   affiliate: Generated<boolean>;
   open_item_id: number | null;
   receipt_media_id: Generated<number | null>;
+  /** Support on the line: sponsor and kind (both, or neither, before publishing) and the unit list price. */
+  support_kind: Generated<SupportKindColumn | null>;
+  sponsor_id: Generated<number | null>;
+  list_price_minor: Generated<number | null>;
+  /** round(quantity × list price) − round(quantity × unit price), at least 0; 0 without support. */
+  value_given_minor: ColumnType<number, never, never>;
   created_at: Generated<Date>;
   updated_at: Generated<Date>;
   net_minor: ColumnType<number, never, never>;
@@ -345,6 +376,8 @@ export interface Database extends FollowersTables {
   builds: BuildsTable;
   episodes: EpisodesTable;
   sponsors: SponsorsTable;
+  sponsor_suppliers: SponsorSuppliersTable;
+  sponsorships: SponsorshipsTable;
   outbox_messages: OutboxMessagesTable;
   seed_runs: SeedRunsTable;
   identities: IdentitiesTable;

@@ -4,7 +4,7 @@ type NullableTimestamp = ColumnType<Date | null, Date | string | null | undefine
 
 export type PostKind = 'question' | 'suggestion' | 'reply';
 export type PostStateColumn = 'open' | 'answered' | 'adopted' | 'set-aside';
-export type NoticeKind = 'new-episode' | 'reply' | 'state-change' | 'new-post';
+export type NoticeKind = 'new-episode' | 'reply' | 'state-change' | 'new-post' | 'sponsor-episode';
 export type NoticeEmail = 'none' | 'sent' | 'digest' | 'digested';
 
 /** A follow of one build or of one creator (all their public builds); exactly one is set. */

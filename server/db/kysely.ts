@@ -10,6 +10,10 @@ pg.types.setTypeParser(pg.types.builtins.INT8, (v: string) => {
   return n;
 });
 
+// date (a calendar day, e.g. a sponsorship's start) stays 'YYYY-MM-DD': as a JS Date it would
+// shift by the process's time zone.
+pg.types.setTypeParser(pg.types.builtins.DATE, (v: string) => v);
+
 export type Db = Kysely<Database>;
 
 export interface DbHandle {

@@ -120,6 +120,7 @@ const KIND_TEXT = {
   'state-change': (n: Row) =>
     `Your ${n.post_kind ?? 'post'} on ${n.build_title}, Ep. ${n.number} is now ${(n.post_state ?? 'open').replace('-', ' ')}`,
   'new-post': (n: Row) => `New ${n.post_kind ?? 'post'} on ${n.build_title}, Ep. ${n.number}`,
+  'sponsor-episode': (n: Row) => `Your support appears in ${n.build_title}, Ep. ${n.number}: ${n.title}`,
 } as const;
 type Row = { build_title: string; number: number; title: string; post_kind: string | null; post_state: string | null };
 

@@ -1,3 +1,4 @@
+import { SponsorCredits } from '../features/sponsors/components/sponsor-credits';
 import { Link, useLoaderData } from 'react-router';
 import { QueryState } from '../components/ui/query-state';
 import { DateText } from '../components/ui/date-text';
@@ -125,6 +126,8 @@ function Build({ build }: { build: BuildOverview }) {
       <p className="mt-3 text-[15px]">
         <a href={paths.feeds.build(build.id)}>Follow new episodes with a feed reader (Atom)</a>
       </p>
+
+      <SponsorCredits sponsors={build.sponsors} />
 
       <section aria-labelledby="episodes-heading" className="mt-10">
         <h2 id="episodes-heading" className="label-condensed border-b-2 border-ink pb-2">

@@ -30,6 +30,8 @@ export interface World {
     receipt: number;
     /** A question by the follower on a published episode of build A. */
     post: number;
+    /** A sponsorship of build A by the world's sponsor. */
+    sponsorship: number;
   };
   slugs: { owner: string; buildA: string; draft: string };
   clients: Record<ActorName, TestClient>;
@@ -299,6 +301,23 @@ export const routeMatrix: Record<string, MatrixRow> = {
   'GET /account/notices': { request: () => ({ path: '/api/account/notices' }), expect: signedIn(200) },
   'PUT /account/notices': { request: () => ({ path: '/api/account/notices', body: {} }), expect: signedIn(400) },
   'POST /unsubscribe': { request: () => ({ path: '/api/unsubscribe', body: {} }), expect: all(400) },
+  // Sponsors, the creator's half: organisation names for pickers are public (they are credited on
+  // pages); a build's sponsorships are the owner's (DESIGN.md: "settings … sponsorships").
+  'GET /sponsors': { request: () => ({ path: '/api/sponsors' }), expect: all(200) },
+  'GET /builds/:buildId/sponsorships': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}/sponsorships` }), expect: ownerOnly(200) },
+  'POST /builds/:buildId/sponsorships': {
+    request: (w) => ({ path: `/api/builds/${w.ids.buildA}/sponsorships`, body: {} }),
+    expect: ownerOnly(400),
+  },
+  'PUT /sponsorships/:sponsorshipId': {
+    request: (w) => ({ path: `/api/sponsorships/${w.ids.sponsorship}`, body: {} }),
+    expect: ownerOnly(400),
+  },
+  'DELETE /sponsorships/:sponsorshipId': {
+    request: (w) => ({ path: `/api/sponsorships/${w.ids.sponsorship}` }),
+    expect: ownerOnly(204),
+    freshWorldPerActor: true,
+  },
 };
 
 /** A fresh cast: build A (public) with its owner and an editor, build B with another owner, a sponsor with a member, an admin. */
@@ -325,6 +344,11 @@ export async function makeWorld(app: TestApp, visibility: 'public' | 'unlisted' 
     .returning('id')
     .executeTakeFirstOrThrow();
   await db.insertInto('sponsor_members').values({ sponsor_id: sponsor.id, user_id: users.sponsorMember.id }).execute();
+  const sponsorship = await db
+    .insertInto('sponsorships')
+    .values({ build_id: buildA.id, sponsor_id: sponsor.id, kind: 'gifted', starts_on: '2026-11-01', ends_on: null })
+    .returning('id')
+    .executeTakeFirstOrThrow();
   const invitation = await db
     .insertInto('invitations')
     .values({
@@ -450,6 +474,7 @@ export async function makeWorld(app: TestApp, visibility: 'public' | 'unlisted' 
       photo: photo.id,
       receipt: receipt.id,
       post: post.id,
+      sponsorship: sponsorship.id,
     },
     slugs: { owner: ownerRow.handle, buildA: buildA.slug, draft: draft.slug },
     clients,

@@ -22,7 +22,7 @@ export const followingResponse = z.object({
 });
 export type FollowingResponse = z.infer<typeof followingResponse>;
 
-export const NOTICE_KINDS = ['new-episode', 'reply', 'state-change', 'new-post'] as const;
+export const NOTICE_KINDS = ['new-episode', 'reply', 'state-change', 'new-post', 'sponsor-episode'] as const;
 export const notification = z.object({
   id: z.number().int(),
   kind: z.enum(NOTICE_KINDS),
