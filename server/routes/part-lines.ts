@@ -21,6 +21,7 @@ import { createPartLine, deletePartLine, episodeLines, getPartLine, updatePartLi
 import { createSupplier, listSuppliers, mergeSuppliers } from '../services/suppliers';
 import { exportLedgerCsv, importLedgerCsv, parseLedgerCsv } from '../services/ledger-csv';
 import { sql } from 'kysely';
+import { episodeDisclosure } from '../services/disclosure';
 
 const episodeParams = z.object({ episodeId: idParam });
 const lineParams = z.object({ partLineId: idParam });
@@ -32,11 +33,12 @@ async function buildCurrency(deps: AppDeps, buildId: number): Promise<string> {
 
 async function episodeParts(deps: AppDeps, episodeId: number): Promise<EpisodeParts> {
   const e = await deps.db.selectFrom('episodes').select('build_id').where('id', '=', episodeId).executeTakeFirstOrThrow();
-  const [items, totals] = await Promise.all([
+  const [items, totals, disclosure] = await Promise.all([
     episodeLines(deps.db, episodeId),
     partTotals(deps.db, { episodeId }, await buildCurrency(deps, e.build_id)),
+    episodeDisclosure(deps.db, episodeId),
   ]);
-  return { items, totals };
+  return { items, totals, disclosure };
 }
 
 async function presentLine(deps: AppDeps, id: number) {

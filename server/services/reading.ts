@@ -11,6 +11,7 @@ import { presentEpisodeListItem } from '../presenters/episodes';
 import { presentImage } from '../presenters/media';
 import { buildCoverRow, episodePictureRows } from './media/pictures';
 import { buildSponsorCredits } from './sponsorships';
+import { episodeDisclosure } from './disclosure';
 
 const iso = (d: Date | string | null): string | null => (d === null ? null : new Date(d).toISOString());
 const hours = (minutes: number | null): number | null => (minutes === null ? null : minutes / 60);
@@ -242,7 +243,10 @@ export async function getEpisodeReading(db: Db, episodeId: number): Promise<Epis
     systemList,
   );
   const now = Date.now();
+  // Sponsors issue: the disclosure is worked out on its own (server/services/disclosure.ts).
+  const disclosure = await episodeDisclosure(db, episodeId);
   return {
+    disclosure,
     id: e.id,
     number: e.number,
     slug: e.slug,
