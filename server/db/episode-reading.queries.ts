@@ -2,6 +2,7 @@ import { sql, type Selectable } from 'kysely';
 import { jsonArrayFrom, jsonObjectFrom } from 'kysely/helpers/postgres';
 import type { MediaTable } from './database';
 import type { Db } from './kysely';
+import { disclosureFactsSql } from './disclosure.queries';
 import { isPublishedEpisode } from './reading.queries';
 
 type MediaRow = Selectable<MediaTable>;
@@ -16,7 +17,7 @@ export const mediaFromJson = (m: MediaJson): MediaRow => ({ ...m, created_at: ne
  * Everything the episode page shows, in ONE SQL round trip: the episode with its build and owner,
  * and as JSON (aggregated in PostgreSQL) its chapters, the build's systems, the published
  * neighbours, open items opened and closed here, the systems its part lines and figures touch,
- * and its cover and gallery. The cost stays one query whatever the episode's size.
+ * its cover and gallery, and the facts its disclosure is worked out from. The cost stays one query whatever the episode's size.
  */
 export function selectEpisodeReading(db: Db, episodeId: number) {
   return db
@@ -126,6 +127,7 @@ export function selectEpisodeReading(db: Db, episodeId: number) {
           .whereRef('g.episode_id', '=', 'e.id')
           .orderBy('g.position'),
       ).as('gallery'),
+      disclosureFactsSql().as('disclosure_facts'),
     ])
     .where('e.id', '=', episodeId);
 }

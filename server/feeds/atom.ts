@@ -5,6 +5,8 @@ import { paths } from '../../src/shared/paths';
 import type { AppDeps } from '../app-deps';
 import { isPublishedEpisode } from '../db/reading.queries';
 import type { Db } from '../db/kysely';
+import { disclosureLine } from '../../src/shared/disclosure';
+import { episodeDisclosure } from '../services/disclosure';
 
 const FEED_SIZE = 30;
 
@@ -37,8 +39,14 @@ function latestForFeed(db: Db, where: { buildId: number } | { publicOnly: true }
 
 type FeedRow = Awaited<ReturnType<typeof latestForFeed>>[number];
 
-function addItems(feed: Feed, origin: string, rows: FeedRow[], withBuild: boolean) {
-  for (const r of rows) {
+const escapeHtml = (t: string) =>
+  t.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+
+async function addItems(db: Db, feed: Feed, origin: string, rows: FeedRow[], withBuild: boolean) {
+  // Every supported episode's item opens with its disclosure, in the summary and in the content.
+  const disclosures = await Promise.all(rows.map((r) => episodeDisclosure(db, r.id)));
+  for (const [i, r] of rows.entries()) {
+    const d = disclosures[i];
     const link = origin + paths.episode(r.handle, r.build_slug, r.slug);
     feed.addItem({
       title: withBuild ? `${r.build_title} — Ep. ${r.number}: ${r.title}` : `Ep. ${r.number}: ${r.title}`,
@@ -46,9 +54,9 @@ function addItems(feed: Feed, origin: string, rows: FeedRow[], withBuild: boolea
       link,
       date: r.updated_at,
       published: r.published_at ?? undefined,
-      description: r.summary ?? undefined,
+      description: [d ? disclosureLine(d) : null, r.summary].filter(Boolean).join(' ') || undefined,
       // The stored write-up is already sanitised HTML (server/services/write-up-html.ts).
-      content: r.write_up_html,
+      content: d ? `<p><strong>${escapeHtml(d.label)}:</strong> ${escapeHtml(d.text)}</p>\n${r.write_up_html}` : r.write_up_html,
       author: [{ name: r.display_name, link: origin + paths.creator(r.handle) }],
     });
   }
@@ -79,7 +87,7 @@ export function feedRouter(deps: AppDeps): Router {
       feedLinks: { atom: origin + feedPaths.site() },
       copyright: 'Each episode belongs to its creator.',
     });
-    addItems(feed, origin, rows, true);
+    await addItems(deps.db, feed, origin, rows, true);
     send(res, feed);
   });
 
@@ -114,7 +122,7 @@ export function feedRouter(deps: AppDeps): Router {
       author: { name: build.display_name, link: origin + paths.creator(build.handle) },
       copyright: `© ${build.display_name}`,
     });
-    addItems(feed, origin, rows, false);
+    await addItems(deps.db, feed, origin, rows, false);
     send(res, feed);
   });
   return router;

@@ -1,3 +1,5 @@
+import { disclosureShort } from '../../src/shared/disclosure';
+import { episodeDisclosure } from '../services/disclosure';
 import { paths } from '../../src/shared/paths';
 import type { AppDeps } from '../app-deps';
 import { noticeMail } from '../services/notice-mail';
@@ -27,7 +29,16 @@ export async function sendDigests(deps: AppDeps, kind: 'new-episode' | 'new-post
         .innerJoin('episodes as e', 'e.id', 'n.episode_id')
         .innerJoin('builds as b', 'b.id', 'e.build_id')
         .innerJoin('users as o', 'o.id', 'b.owner_id')
-        .select(['n.id', 'e.number', 'e.title', 'e.slug', 'b.title as build_title', 'b.slug as build_slug', 'o.handle'])
+        .select([
+          'n.id',
+          'e.id as episode_id',
+          'e.number',
+          'e.title',
+          'e.slug',
+          'b.title as build_title',
+          'b.slug as build_slug',
+          'o.handle',
+        ])
         .where('n.user_id', '=', user_id)
         .where('n.kind', '=', kind)
         .where('n.email', '=', 'digest')
@@ -48,6 +59,8 @@ export async function sendDigests(deps: AppDeps, kind: 'new-episode' | 'new-post
       const [r] = await noticeRecipients(trx, [user_id]);
       if (!r?.address) return;
       const weekly = kind === 'new-episode';
+      // A supported episode carries its disclosure into the digest too (short form beside its link).
+      const disclosures = weekly ? await Promise.all(items.map((i) => episodeDisclosure(trx, i.episode_id))) : [];
       await deps.outbox.enqueue(
         trx,
         noticeMail(deps.config, {
@@ -59,8 +72,8 @@ export async function sendDigests(deps: AppDeps, kind: 'new-episode' | 'new-post
             ? `This week on Rivet & Reel: ${items.length} new episode${items.length === 1 ? '' : 's'}`
             : `${items.length} new post${items.length === 1 ? '' : 's'} on your builds`,
           paragraphs: [weekly ? 'New episodes from what you follow:' : 'New questions and suggestions on your builds:'],
-          links: items.map((i) => ({
-            label: `${i.build_title} · Ep. ${i.number}: ${i.title}`,
+          links: items.map((i, k) => ({
+            label: `${i.build_title} · Ep. ${i.number}: ${i.title}${disclosures[k] ? ` (${disclosureShort(disclosures[k])})` : ''}`,
             path: paths.episode(i.handle, i.build_slug, i.slug),
           })),
           reason: weekly ? 'You asked for a weekly digest of new episodes.' : 'You asked for a daily digest of new posts.',

@@ -102,6 +102,7 @@ export async function getEpisode(db: Db | Trx, episodeId: number): Promise<Episo
     durationSeconds: e.duration_seconds,
     hoursWorked: e.minutes_worked === null ? null : e.minutes_worked / 60,
     raisedVehicle: e.raised_vehicle,
+    videoDisclosureConfirmed: e.video_disclosure_confirmed,
     chapters: chapters.map((c, i) => ({
       id: c.id,
       startSeconds: c.start_seconds,
@@ -223,6 +224,7 @@ export async function updateEpisode(db: Db, episodeId: number, input: EpisodeUpd
           ? { minutes_worked: input.hoursWorked === null ? null : Math.round(input.hoursWorked * 60) }
           : {}),
         ...(input.raisedVehicle !== undefined ? { raised_vehicle: input.raisedVehicle } : {}),
+        ...(input.videoDisclosureConfirmed !== undefined ? { video_disclosure_confirmed: input.videoDisclosureConfirmed } : {}),
         version: row.version + 1,
         updated_at: sql<Date>`now()`,
       })

@@ -1,3 +1,5 @@
+import { disclosureLine } from '../../src/shared/disclosure';
+import { episodeDisclosure } from './disclosure';
 import type { Kysely } from 'kysely';
 import { paths } from '../../src/shared/paths';
 import type { AppDeps } from '../app-deps';
@@ -45,6 +47,8 @@ export async function announceEpisode(trx: Trx, deps: NoticeDeps, episodeId: num
     .where('user_id', 'not in', trx.selectFrom('build_members').select('user_id').where('build_id', '=', e.build_id))
     .execute();
   let mailed = 0;
+  // The disclosure goes first in the mail, as on the page (CAP/ASA guide: up front).
+  const disclosure = await episodeDisclosure(trx, episodeId);
   for (const r of await noticeRecipients(
     trx,
     followers.map((f) => f.user_id),
@@ -66,7 +70,11 @@ export async function announceEpisode(trx: Trx, deps: NoticeDeps, episodeId: num
         scope: 'new-episodes',
         kind: 'notice-new-episode',
         subject: `New episode of ${e.build_title}: ${e.title}`,
-        paragraphs: [`${e.owner_name} published episode ${e.number} of ${e.build_title}: “${e.title}”.`, ...(e.summary ? [e.summary] : [])],
+        paragraphs: [
+          ...(disclosure ? [disclosureLine(disclosure)] : []),
+          `${e.owner_name} published episode ${e.number} of ${e.build_title}: “${e.title}”.`,
+          ...(e.summary ? [e.summary] : []),
+        ],
         links: [{ label: 'Read the episode', path: episodePath(e) }],
         reason: `You follow ${e.build_title} or ${e.owner_name} on Rivet & Reel.`,
       }),

@@ -1,6 +1,7 @@
 import type { BuildTotals, EpisodeParts } from '../../src/shared/schemas/parts';
 import { buildBreakdowns, listLines, partTotals } from '../db/part-lines.queries';
 import type { Db } from '../db/kysely';
+import { episodeDisclosure } from './disclosure';
 import { episodeLines } from './part-lines';
 
 async function buildCurrency(db: Db, buildId: number): Promise<string> {
@@ -10,8 +11,12 @@ async function buildCurrency(db: Db, buildId: number): Promise<string> {
 /** An episode's parts list with its totals (receipts included: the caller strips them for readers). */
 export async function getEpisodeParts(db: Db, episodeId: number): Promise<EpisodeParts> {
   const e = await db.selectFrom('episodes').select('build_id').where('id', '=', episodeId).executeTakeFirstOrThrow();
-  const [items, totals] = await Promise.all([episodeLines(db, episodeId), partTotals(db, { episodeId }, await buildCurrency(db, e.build_id))]);
-  return { items, totals };
+  const [items, totals, disclosure] = await Promise.all([
+    episodeLines(db, episodeId),
+    partTotals(db, { episodeId }, await buildCurrency(db, e.build_id)),
+    episodeDisclosure(db, episodeId),
+  ]);
+  return { items, totals, disclosure };
 }
 
 /** A build's spend: totals, by system against budgets, supplier, kind and episode, and what is on order. */

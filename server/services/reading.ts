@@ -11,6 +11,7 @@ import { presentImage } from '../presenters/media';
 import { buildCoverRow } from './media/pictures';
 import { findEpisodeReading } from '../db/episode-reading.queries';
 import { buildSponsorCredits } from './sponsorships';
+import { disclosureFromFacts } from './disclosure';
 
 const iso = (d: Date | string | null): string | null => (d === null ? null : new Date(d).toISOString());
 const hours = (minutes: number | null): number | null => (minutes === null ? null : minutes / 60);
@@ -159,7 +160,10 @@ export async function getEpisodeReading(db: Db, episodeId: number): Promise<Epis
     },
     systemList,
   );
+  // Sponsors issue: the disclosure, from facts the same query gathered (server/services/disclosure.ts).
+  const disclosure = disclosureFromFacts(e.disclosure_facts);
   return {
+    disclosure,
     id: e.id,
     number: e.number,
     slug: e.slug,

@@ -8,6 +8,7 @@ import { useOpenItems } from '../features/episode-editor/api/get-open-items';
 import { EpisodeEditor } from '../features/episode-editor/components/episode-editor';
 import { EpisodePicturesPanel } from '../features/media/components/episode-pictures-panel';
 import { PartsPanel } from '../features/parts/components/editor/parts-panel';
+import { useEpisodeParts } from '../features/parts/api/get-episode-parts';
 import { ApiError } from '../lib/api-client';
 import type { Build } from '../shared/schemas/builds';
 import type { Episode } from '../shared/schemas/episodes';
@@ -55,6 +56,8 @@ export function Component() {
 function EditorScreen({ episodeId }: { episodeId: number }) {
   const { data: episode, error, isFetching, refetch } = useEditorEpisode(episodeId);
   const { data: build } = useEditorBuild(episode?.buildId);
+  // The disclosure follows the saved part lines, so it comes with them (refreshed on every line change).
+  const { data: parts } = useEpisodeParts(episodeId);
 
   if (!episode) {
     if (!error) return <HydrateFallback />;
@@ -82,6 +85,7 @@ function EditorScreen({ episodeId }: { episodeId: number }) {
       key={episode.id}
       episode={episode}
       build={build}
+      disclosure={parts ? parts.disclosure : undefined}
       parts={
         build ? (
           <div className="space-y-10">

@@ -1,3 +1,5 @@
+import { DisclosureBar } from '../features/reading/components/disclosure-bar';
+import { disclosureShort } from '../shared/disclosure';
 import { useEffect, useState } from 'react';
 import { Link, useLoaderData } from 'react-router';
 import { QueryState } from '../components/ui/query-state';
@@ -105,9 +107,16 @@ function Episode({ episode }: { episode: EpisodeReading }) {
   const buildPath = paths.build(build.owner.handle, build.slug);
   const canonical = paths.episode(build.owner.handle, build.slug, episode.slug);
   const systems = [...new Map(episode.chapters.flatMap((c) => (c.system ? [[c.system.key, c.system] as const] : []))).values()];
+  // The share card says the disclosure first, so it survives being cut short.
   const description = clipDescription(
-    episode.summary ??
-      `Episode ${episode.number} of ${build.title}, a ${vehicleLine(build)} restored on camera by ${build.owner.displayName}.`,
+    [
+      episode.disclosure ? disclosureShort(episode.disclosure) : null,
+      episode.summary ??
+        `Episode ${episode.number} of ${build.title}, a ${vehicleLine(build)} restored on camera by ${build.owner.displayName}.`,
+    ]
+      .filter(Boolean)
+      .join(' '),
+    episode.disclosure ? 300 : 160,
   );
 
   return (
@@ -133,7 +142,8 @@ function Episode({ episode }: { episode: EpisodeReading }) {
         <span aria-current="page">Episode {episode.number}</span>
       </nav>
 
-      {/* The sponsors issue puts the disclosure here, first under the breadcrumbs. */}
+      {/* Disclosure first, before anything else of the episode (CAP/ASA guide: up front; FTC 16 CFR 255: hard to miss). */}
+      {episode.disclosure ? <DisclosureBar disclosure={episode.disclosure} /> : null}
 
       <header className="mt-4">
         <p className="font-condensed text-[15px] font-semibold tracking-[0.14em] text-oxide uppercase">

@@ -63,6 +63,7 @@ export function makeEpisode(overrides: Partial<Episode> = {}): Episode {
     durationSeconds: null,
     hoursWorked: null,
     raisedVehicle: false,
+    videoDisclosureConfirmed: false,
     chapters: [],
     status: 'draft',
     publishAt: null,

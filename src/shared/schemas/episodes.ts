@@ -59,6 +59,8 @@ const episodeFields = {
   /** Hours worked in the session, to the quarter hour or finer (stored as minutes). */
   hoursWorked: z.number().min(0).max(1000).nullable(),
   raisedVehicle: z.boolean(),
+  /** The creator confirms the video itself discloses the support too (needed to publish a supported episode). */
+  videoDisclosureConfirmed: z.boolean(),
   chapters: z.array(chapterInput).max(200),
 };
 

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { currencyExponent, parseScaled, QUANTITY_SCALE, RATE_SCALE } from '../money';
 import { pagedList, pageQuery } from './common';
-import { SUPPORT_KINDS } from './sponsors';
+import { disclosure, SUPPORT_KINDS } from './sponsors';
 
 // The parts list of DESIGN.md ("Part line", "Ledger", "Money words"): the API contract.
 
@@ -214,7 +214,12 @@ export const partTotals = z.object({
 });
 export type PartTotals = z.infer<typeof partTotals>;
 
-export const episodeParts = z.object({ items: z.array(partLine), totals: partTotals });
+export const episodeParts = z.object({
+  items: z.array(partLine),
+  totals: partTotals,
+  /** The episode's disclosure as the lines (and the build's paid sponsorships) stand now; the editor shows and exports it. */
+  disclosure: disclosure.nullable(),
+});
 export type EpisodeParts = z.infer<typeof episodeParts>;
 
 export const buildTotals = z.object({

@@ -3,7 +3,7 @@ import { VEHICLE_KINDS, VISIBILITIES } from './builds';
 import { pagedList, pageQuery } from './common';
 import { episodeListItem } from './episodes';
 import { imageRef } from './media';
-import { sponsorRef } from './sponsors';
+import { disclosure, sponsorRef } from './sponsors';
 
 // The public side: what readers get on the builds directory, build, episode, creator and search pages.
 
@@ -111,6 +111,8 @@ export const episodeReading = z.object({
     }),
   ),
   caution: z.array(z.string()),
+  /** The disclosure readers see first when work in the episode was supported (src/shared/disclosure.ts). */
+  disclosure: disclosure.nullable(),
   /** The build's vehicle systems, in its order. */
   systems: z.array(z.object({ key: z.string(), name: z.string(), safetyCritical: z.boolean() })),
   build: z.object({

@@ -128,3 +128,7 @@ export const sponsorshipList = z.object({ items: z.array(sponsorship) });
 export type SponsorshipList = z.infer<typeof sponsorshipList>;
 
 export const SUPPORT_KIND_LABELS: Record<SupportKind, string> = { gifted: 'Gifted', discounted: 'Discounted', paid: 'Paid' };
+
+/** An episode's disclosure (src/shared/disclosure.ts): a short label, plain sentences, who is credited. */
+export const disclosure = z.object({ label: z.string(), text: z.string(), sponsors: z.array(sponsorRef), affiliate: z.boolean() });
+export type DisclosureJson = z.infer<typeof disclosure>;

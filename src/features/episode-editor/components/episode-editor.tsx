@@ -16,6 +16,9 @@ import { FiguresPanel } from './figures/figures-panel';
 import { LeaveDialog } from './leave-dialog';
 import { OpenItemsPanel } from './open-items/open-items-panel';
 import { PublishControls } from './publish/publish-controls';
+import { DisclosurePanel } from './publish/disclosure-panel';
+import { disclosureLine } from '../../../shared/disclosure';
+import type { DisclosureJson } from '../../../shared/schemas/sponsors';
 import { RestoredNotice, SetAsideNotice } from './restore-notice';
 import { SaveStatusLine } from './save-status';
 import { WriteUpEditor } from './write-up/write-up-editor';
@@ -27,6 +30,8 @@ interface EpisodeEditorProps {
   build: Build | undefined;
   /** The parts panel, composed by the route (another feature's), shown full width under the rest. */
   parts?: ReactNode;
+  /** The episode's disclosure as its saved lines stand (from the parts feature, composed by the route); undefined while loading. */
+  disclosure?: DisclosureJson | null;
 }
 
 /** What each field's input would send, or why it cannot be sent yet; the server's 400 messages win. */
@@ -41,7 +46,7 @@ function fieldErrors(draft: EditorDraft, rejected: Partial<Record<DraftField, st
 }
 
 /** The episode editor: fields, write-up, chapters, parts, figures, open items, publishing, with autosave throughout. */
-export function EpisodeEditor({ episode, build, parts }: EpisodeEditorProps) {
+export function EpisodeEditor({ episode, build, parts, disclosure }: EpisodeEditorProps) {
   const autosave = useAutosave(episode);
   const { draft, change, snapshot, observe } = autosave;
   const { blocker, asking } = useLeaveWarning(autosave.hasUnsaved, autosave.saveNow);
@@ -118,11 +123,17 @@ export function EpisodeEditor({ episode, build, parts }: EpisodeEditorProps) {
             videoUrl={videoUrl}
             linkPattern={build?.videoLinkPattern ?? DEFAULT_VIDEO_LINK_PATTERN}
             serverMessages={snapshot.rejectedRows}
+            disclosure={disclosure ? disclosureLine(disclosure) : null}
           />
           <FiguresPanel episodeId={server.id} systems={build?.systems ?? []} />
         </div>
         <aside aria-label="Publishing, safety and open items" className="min-w-0 space-y-10">
           <PublishControls episode={server} commit={autosave.commit} />
+          <DisclosurePanel
+            disclosure={disclosure}
+            confirmed={draft.videoDisclosureConfirmed}
+            onChange={(videoDisclosureConfirmed) => change({ videoDisclosureConfirmed })}
+          />
           <CautionPreview
             raisedVehicle={draft.raisedVehicle}
             rows={draft.chapters}

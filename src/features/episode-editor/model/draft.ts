@@ -26,6 +26,7 @@ export interface EditorDraft {
   duration: string;
   hoursWorked: string;
   raisedVehicle: boolean;
+  videoDisclosureConfirmed: boolean;
   chapters: ChapterRow[];
 }
 
@@ -41,6 +42,7 @@ export const DRAFT_FIELDS: readonly DraftField[] = [
   'duration',
   'hoursWorked',
   'raisedVehicle',
+  'videoDisclosureConfirmed',
   'chapters',
 ];
 
@@ -71,6 +73,7 @@ export function draftFromEpisode(ep: Episode): EditorDraft {
     duration: ep.durationSeconds === null ? '' : formatTime(ep.durationSeconds),
     hoursWorked: formatHours(ep.hoursWorked),
     raisedVehicle: ep.raisedVehicle,
+    videoDisclosureConfirmed: ep.videoDisclosureConfirmed,
     chapters: ep.chapters.map((c) => ({
       key: `chapter-${c.id}`,
       start: formatTime(c.startSeconds),

@@ -10,6 +10,7 @@ export const FIELD_LABELS: Record<DraftField, string> = {
   duration: 'video length',
   hoursWorked: 'hours worked',
   raisedVehicle: 'raised-vehicle mark',
+  videoDisclosureConfirmed: 'video disclosure confirmation',
   chapters: 'chapters',
 };
 

@@ -75,6 +75,8 @@ export function convertField(field: Exclude<DraftField, 'chapters'>, draft: Draf
     }
     case 'raisedVehicle':
       return { ok: true, value: draft.raisedVehicle ?? false };
+    case 'videoDisclosureConfirmed':
+      return { ok: true, value: draft.videoDisclosureConfirmed ?? false };
     default:
       return { ok: false, message: 'unknown field' };
   }
@@ -89,6 +91,7 @@ const apiName: Record<DraftField, keyof EpisodeFields> = {
   duration: 'durationSeconds',
   hoursWorked: 'hoursWorked',
   raisedVehicle: 'raisedVehicle',
+  videoDisclosureConfirmed: 'videoDisclosureConfirmed',
   chapters: 'chapters',
 };
 

@@ -64,7 +64,7 @@ export function createFakePartsServer({ episodeId = 41, buildCurrency = 'EUR' } 
     }
     if (url === `/api/episodes/${episodeId}/part-lines` && method === 'GET') {
       const inputs = state.lines.map((l) => ({ ...l, supplierId: l.supplier?.id ?? null }) as unknown as PartLineInput);
-      return json(200, { items: state.lines, totals: computeTotals(inputs.map(totalsLineOf), buildCurrency) });
+      return json(200, { items: state.lines, totals: computeTotals(inputs.map(totalsLineOf), buildCurrency), disclosure: null });
     }
     if (url === `/api/episodes/${episodeId}/part-lines` && method === 'POST') {
       const { position, ...line } = body as PartLineInput & { position?: number };

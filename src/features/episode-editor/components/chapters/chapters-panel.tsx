@@ -18,6 +18,8 @@ export interface ChaptersPanelProps {
   linkPattern: string;
   /** The server's 400 messages about a row, by row key. */
   serverMessages?: Record<string, string[]>;
+  /** The disclosure line that opens the exported block, when the episode needs one. */
+  disclosure?: string | null;
 }
 
 const NO_MESSAGES: RowMessages = { start: [], title: [] };
@@ -41,6 +43,7 @@ export function ChaptersPanel({
   videoUrl,
   linkPattern,
   serverMessages = {},
+  disclosure = null,
 }: ChaptersPanelProps) {
   const idBase = useId();
   const startInputs = useRef(new Map<string, HTMLInputElement>());
@@ -157,7 +160,7 @@ export function ChaptersPanel({
         {announcement}
       </p>
       <PasteBlock existing={filled} onImport={onImport} />
-      <ExportBlock rows={rows} durationSeconds={durationSeconds} onCheckExport={setCheckExport} />
+      <ExportBlock rows={rows} durationSeconds={durationSeconds} onCheckExport={setCheckExport} disclosure={disclosure ?? null} />
     </section>
   );
 }

@@ -10,6 +10,8 @@ interface ExportBlockProps {
   durationSeconds: number | null;
   /** The video host's rules (first at 0:00, at least three) apply from the first try to copy. */
   onCheckExport: (failed: boolean) => void;
+  /** Opens the block when the episode needs a disclosure (the video description must carry it too). */
+  disclosure?: string | null;
 }
 
 type Outcome = { kind: 'copied'; count: number } | { kind: 'manual'; text: string } | { kind: 'problems'; message: string } | null;
@@ -25,7 +27,7 @@ async function writeClipboard(text: string): Promise<boolean> {
 }
 
 /** "Copy for the video description": the chapter block on the clipboard, or selected for copying by hand. */
-export function ExportBlock({ rows, durationSeconds, onCheckExport }: ExportBlockProps) {
+export function ExportBlock({ rows, durationSeconds, onCheckExport, disclosure = null }: ExportBlockProps) {
   const [outcome, setOutcome] = useState<Outcome>(null);
   const manualRef = useRef<HTMLTextAreaElement>(null);
   const id = useId();
@@ -53,7 +55,7 @@ export function ExportBlock({ rows, durationSeconds, onCheckExport }: ExportBloc
       });
     }
     onCheckExport(false);
-    const text = exportChapterBlock(chapters);
+    const text = exportChapterBlock(chapters, { disclosure });
     setOutcome((await writeClipboard(text)) ? { kind: 'copied', count: chapters.length } : { kind: 'manual', text });
   };
 
