@@ -8,6 +8,7 @@ import { renderWriteUp } from '../../server/services/write-up-html';
 import type { WriteUpDoc } from '../../src/shared/write-up';
 import { createOwnedBuild } from '../helpers/accounts';
 import { createEpisode } from '../helpers/factories';
+import { signInByEmail, TestClient } from '../helpers/http-client';
 import { expectOnlyLoopback, launchBrowser, openPage, visit, type TrackedPage } from '../helpers/browser';
 import { startTestApp, type TestApp } from '../helpers/test-app';
 import { TEST_DIST_DIR } from '../setup/build-global';
@@ -15,6 +16,9 @@ import { TEST_DIST_DIR } from '../setup/build-global';
 let app: TestApp;
 let browser: Browser;
 let tracked: TrackedPage;
+let buildId: number;
+let draftId: number;
+let sponsorName: string;
 
 const writeUp: WriteUpDoc = {
   type: 'doc',
@@ -26,7 +30,7 @@ beforeAll(async () => {
   app = await startTestApp({ distDir: TEST_DIST_DIR });
   const db = app.deps.db;
   const { build } = await createOwnedBuild(db, {
-    owner: { handle: 'hollis-quarry', display_name: 'Hollis Quarry' },
+    owner: { handle: 'hollis-quarry', display_name: 'Hollis Quarry', email: 'hollis@example.test' },
     build: { slug: 'ashby-1971', title: '1971 Ashby Kestrel estate', vehicle_kind: 'car', currency: 'GBP' },
   });
   const sponsor = await db
@@ -59,6 +63,37 @@ beforeAll(async () => {
       support_kind: 'gifted',
       sponsor_id: sponsor.id,
       list_price_minor: 1899,
+    })
+    .execute();
+  buildId = build.id;
+  sponsorName = 'Wendle Cables';
+  draftId = (
+    await createEpisode(db, {
+      build_id: build.id,
+      slug: 'gearbox-mount',
+      title: 'Gearbox mount',
+      status: 'draft',
+      published_at: null,
+      write_up: JSON.stringify(writeUp),
+      write_up_html: renderWriteUp(writeUp),
+    })
+  ).id;
+  await db
+    .insertInto('part_lines')
+    .values({
+      build_id: build.id,
+      episode_id: draftId,
+      position: 0,
+      kind: 'part',
+      description: 'Gearbox mount, rubber',
+      source: 'new',
+      status: 'fitted',
+      quantity: '1',
+      unit_price_minor: 1200,
+      currency: 'GBP',
+      support_kind: 'discounted',
+      sponsor_id: sponsor.id,
+      list_price_minor: 1600,
     })
     .execute();
   browser = await launchBrowser();
@@ -108,5 +143,56 @@ describe('a supported episode', () => {
     expect(await credits.getByRole('link', { name: 'Wendle Cables' }).getAttribute('href')).toBe('https://wendle-cables.example');
     expect(tracked.consoleErrors).toEqual([]);
     expectOnlyLoopback(tracked);
+  });
+});
+
+describe('the owner', () => {
+  let owner: TrackedPage;
+  beforeAll(async () => {
+    const client = new TestClient(app.baseUrl);
+    await signInByEmail(client, app.deps.db, 'hollis@example.test');
+    owner = await openPage(browser, { signedIn: { cookie: client.cookie!, url: app.baseUrl } });
+  });
+  afterAll(async () => {
+    await owner?.close();
+  });
+
+  it('adds a sponsorship in the build settings and removes it after confirming', async () => {
+    const page = await visit(owner, `${app.baseUrl}/workbench/builds/${buildId}/settings`);
+    const section = page.getByRole('region', { name: 'Sponsors' });
+    await section.getByText('No sponsorships yet.').waitFor();
+    const form = section.getByRole('form', { name: 'Add sponsorship' });
+    await form.getByLabel('Sponsor').selectOption({ label: sponsorName });
+    await form.getByLabel('Kind of support').selectOption('paid');
+    await form.getByLabel('Starts on').fill('2026-11-01');
+    await form.getByRole('button', { name: 'Add sponsorship' }).click();
+    await section.getByText('from 2026-11-01').waitFor();
+    await section.getByRole('button', { name: `Remove the sponsorship by ${sponsorName}` }).click();
+    const dialog = page.getByRole('dialog', { name: `Remove the sponsorship by ${sponsorName}?` });
+    await dialog.getByRole('button', { name: 'Remove sponsorship' }).click();
+    await section.getByText('No sponsorships yet.').waitFor();
+    expect(owner.consoleErrors).toEqual([]);
+  });
+
+  it('sees the disclosure in the editor and publishes once the video is confirmed to disclose it', async () => {
+    const page = await visit(owner, `${app.baseUrl}/workbench/episodes/${draftId}/edit`);
+    const panel = page.getByRole('region', { name: 'Disclosure' });
+    await panel.getByText('Wendle Cables sold one part shown here at a discount.').waitFor();
+    await page.getByRole('button', { name: 'Publish now' }).click();
+    await page
+      .getByRole('alert')
+      .getByText(/Confirm that the video discloses this too/)
+      .waitFor();
+    await panel.getByLabel('The video discloses this too').check();
+    await page.getByRole('button', { name: 'Publish now' }).click();
+    await page.getByText('Published. Readers can see it now.').waitFor();
+    const row = await app.deps.db
+      .selectFrom('episodes')
+      .select(['status', 'video_disclosure_confirmed'])
+      .where('id', '=', draftId)
+      .executeTakeFirstOrThrow();
+    expect(row).toEqual({ status: 'published', video_disclosure_confirmed: true });
+    // The one refused publish (422) is the browser's only complaint.
+    expect(owner.consoleErrors).toEqual(['Failed to load resource: the server responded with a status of 422 (Unprocessable Entity)']);
   });
 });
