@@ -11,9 +11,10 @@ const utcDay = (d: Date) => d.toISOString().slice(0, 10);
 /**
  * The disclosure an episode needs (or null), from what is stored now: its supported lines grouped by
  * sponsor and kind, its affiliate links, and the build's paid sponsorships on the day it is (or
- * would be) published — the publication time, else the scheduled time, else today.
+ * would be) published — `at` when the caller is about to schedule it, else the publication time,
+ * else the scheduled time, else today.
  */
-export async function episodeDisclosure(db: Db, episodeId: number): Promise<Disclosure | null> {
+export async function episodeDisclosure(db: Db, episodeId: number, opts: { at?: Date } = {}): Promise<Disclosure | null> {
   const e = await db
     .selectFrom('episodes')
     .select(['build_id', 'status', 'published_at', 'publish_at'])
@@ -48,7 +49,8 @@ export async function episodeDisclosure(db: Db, episodeId: number): Promise<Disc
     ids.length ? (await sponsorRefQuery(db).where('sp.id', 'in', ids).execute()).map((r) => [r.id, presentSponsorRef(r)]) : [],
   );
   const when =
-    e.status === 'published' && e.published_at ? e.published_at : e.status === 'scheduled' && e.publish_at ? e.publish_at : new Date();
+    opts.at ??
+    (e.status === 'published' && e.published_at ? e.published_at : e.status === 'scheduled' && e.publish_at ? e.publish_at : new Date());
   return buildDisclosure({
     support: groups.map((g) => ({
       sponsor: g.sponsor_id ? (refs.get(g.sponsor_id) ?? null) : null,

@@ -5,8 +5,8 @@ import { sql } from 'kysely';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { exportChapterBlock } from '../../src/shared/chapters';
 import { disclosureLine } from '../../src/shared/disclosure';
-import { createOwnedBuild, signedInClient } from '../helpers/accounts';
-import { createEpisode, createUser } from '../helpers/factories';
+import { addBuildMember, createOwnedBuild, signedInClient } from '../helpers/accounts';
+import { createBuild, createEpisode, createUser } from '../helpers/factories';
 import { TestClient } from '../helpers/http-client';
 import { startTestApp, type TestApp } from '../helpers/test-app';
 
@@ -181,6 +181,34 @@ describe('a paid sponsorship and affiliate links', () => {
     const refused = await owner.post(`/api/episodes/${episodeId}/publish`, { version: await version(episodeId) });
     expect(refused.status).toBe(422);
     expect(Object.keys(refused.body.error.fields)).toEqual(['videoDisclosureConfirmed']);
+  });
+});
+
+describe('scheduling into a paid sponsorship', () => {
+  it('judges the sponsorship on the scheduled day, not today', async () => {
+    const db = app.deps.db;
+    const ownerId = (await db.selectFrom('users').select('id').where('handle', '=', 'disclosure-owner').executeTakeFirstOrThrow()).id;
+    const build = await createBuild(db, { owner_id: ownerId, slug: 'later-sponsored', currency: 'GBP' });
+    await addBuildMember(db, build.id, ownerId, 'owner');
+    const day = (offset: number) => new Date(Date.now() + offset * 86_400_000);
+    expect(
+      (
+        await owner.post(`/api/builds/${build.id}/sponsorships`, {
+          sponsorId: paidSponsorId,
+          kind: 'paid',
+          startsOn: day(10).toISOString().slice(0, 10),
+          endsOn: null,
+        })
+      ).status,
+    ).toBe(201);
+    const e = await createEpisode(db, { build_id: build.id, status: 'draft', published_at: null, write_up: doc('Welding the sill.') });
+    // Today no disclosure is needed; twelve days from now the paid sponsorship covers the day.
+    expect((await owner.get(`/api/episodes/${e.id}/part-lines`)).body.disclosure).toBeNull();
+    const res = await owner.post(`/api/episodes/${e.id}/schedule`, { version: await version(e.id), publishAt: day(12).toISOString() });
+    expect(res.status).toBe(422);
+    expect(Object.keys(res.body.error.fields)).toEqual(['videoDisclosureConfirmed']);
+    const soon = await owner.post(`/api/episodes/${e.id}/schedule`, { version: await version(e.id), publishAt: day(2).toISOString() });
+    expect(soon.status, JSON.stringify(soon.body)).toBe(200);
   });
 });
 
