@@ -3,6 +3,7 @@ import type { AppDeps } from '../app-deps';
 import { TRASH_DAYS } from '../services/builds';
 import { announceEpisode } from '../services/notices';
 import { runPublishChecks } from '../services/publish-checks';
+import { mailOwnerPublishFailed } from '../services/publish-failed-mail';
 
 export const PUBLISH_DUE_JOB = 'episodes.publish-due';
 export const PURGE_TRASH_JOB = 'trash.purge';
@@ -56,6 +57,8 @@ export async function publishDueEpisodes(deps: AppDeps, onlyId?: number): Promis
         .where('id', '=', id)
         .execute();
       if (!problems.length) await announceEpisode(trx, deps, id);
+      // Back to draft: the owner hears why, in the same transaction.
+      else await mailOwnerPublishFailed(trx, deps, id, problems);
       return problems.length === 0;
     });
     if (done) published.push(id);

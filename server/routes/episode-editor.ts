@@ -33,8 +33,8 @@ async function versioned(deps: AppDeps, res: Response, id: number, write: () => 
   return present(deps, id);
 }
 
-async function refuseUnpublishable(deps: AppDeps, id: number) {
-  const problems = await runPublishChecks(deps.db, id);
+async function refuseUnpublishable(deps: AppDeps, id: number, publishAt?: Date) {
+  const problems = await runPublishChecks(deps.db, id, publishAt);
   if (!problems.length) return;
   const fields: Record<string, string[]> = {};
   for (const p of problems) (fields[p.field] ??= []).push(p.message);
@@ -86,7 +86,7 @@ export const episodeEditorRoutes = [
       const when = new Date(body.publishAt);
       if (when.getTime() <= Date.now() + 30_000)
         throw new HttpError(400, 'invalid_request', 'Pick a time in the future', { publishAt: ['must be in the future'] });
-      await refuseUnpublishable(deps, params.episodeId);
+      await refuseUnpublishable(deps, params.episodeId, when);
       const out = await versioned(deps, res, params.episodeId, () => setStatus(deps, params.episodeId, body.version, 'scheduled', when));
       if (out) await deps.queue.send(PUBLISH_DUE_JOB, { episodeId: params.episodeId }, { startAfter: when });
       return out;

@@ -7,6 +7,7 @@ import { demoFiguresSection } from './sections/demo-figures';
 import { demoFollowersSection } from './sections/demo-followers';
 import { demoPartsSection } from './sections/demo-parts';
 import { demoPhotosSection } from './sections/demo-photos';
+import { demoSponsorsSection } from './sections/demo-sponsors';
 
 /** Every demo-seed section, in the order they run (later sections may use earlier ones' rows). */
 export const seedSections: readonly SeedSection[] = [
@@ -15,6 +16,7 @@ export const seedSections: readonly SeedSection[] = [
   demoPartsSection,
   demoFiguresSection,
   demoFollowersSection,
+  demoSponsorsSection,
   demoPhotosSection,
 ];
 

@@ -10,16 +10,18 @@ const utcDay = (d: Date) => d.toISOString().slice(0, 10);
 /**
  * The disclosure from its facts: supported lines grouped by sponsor and kind, affiliate links, and
  * the build's paid sponsorships on the day the episode is (or would be) published — the
- * publication time, else the scheduled time, else today.
+ * day `at` when the caller is about to schedule it, else the publication time, else the scheduled
+ * time, else today.
  */
-export function disclosureFromFacts(f: DisclosureFacts): Disclosure | null {
+export function disclosureFromFacts(f: DisclosureFacts, at?: Date): Disclosure | null {
   const refs = new Map(f.sponsors.map((r) => [r.id, presentSponsorRef(r)]));
   const when =
-    f.status === 'published' && f.published_at
+    at ??
+    (f.status === 'published' && f.published_at
       ? new Date(f.published_at)
       : f.status === 'scheduled' && f.publish_at
         ? new Date(f.publish_at)
-        : new Date();
+        : new Date());
   return buildDisclosure({
     // A line with a sponsor but no kind yet is not "supported" until its kind is set (the publish check asks for it).
     support: f.groups.map((g) => ({
@@ -37,7 +39,7 @@ export function disclosureFromFacts(f: DisclosureFacts): Disclosure | null {
 }
 
 /** The disclosure an episode needs (or null), from what is stored now, in one query. */
-export async function episodeDisclosure(db: Db, episodeId: number): Promise<Disclosure | null> {
+export async function episodeDisclosure(db: Db, episodeId: number, opts: { at?: Date } = {}): Promise<Disclosure | null> {
   const facts = await findDisclosureFacts(db, episodeId);
-  return facts ? disclosureFromFacts(facts) : null;
+  return facts ? disclosureFromFacts(facts, opts.at) : null;
 }

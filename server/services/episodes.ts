@@ -114,6 +114,7 @@ export async function getEpisode(db: Db | Trx, episodeId: number): Promise<Episo
     status: e.status,
     publishAt: e.publish_at?.toISOString() ?? null,
     publishedAt: e.published_at?.toISOString() ?? null,
+    publishError: e.publish_error,
     version: e.version,
     needsCaution: caution.needed,
     deletedAt: e.deleted_at?.toISOString() ?? null,

@@ -33,8 +33,13 @@ export const LEDGER_CSV_COLUMNS = [
   'avoided_cost',
   'buy_url',
   'affiliate',
+  'support',
+  'sponsor',
+  'list_price',
 ] as const;
 type Column = (typeof LEDGER_CSV_COLUMNS)[number];
+/** Columns a file may leave out (files written before support was recorded). */
+const OPTIONAL_COLUMNS: readonly Column[] = ['support', 'sponsor', 'list_price'];
 
 export const MAX_IMPORT_ROWS = 5000;
 
@@ -63,6 +68,9 @@ export async function exportLedgerCsv(db: Db, buildId: number): Promise<string> 
       l.avoidedCostMinor === null ? '' : minorToDecimal(l.avoidedCostMinor, l.currency),
       l.buyUrl ?? '',
       l.affiliate ? 'yes' : 'no',
+      l.supportKind ?? '',
+      l.sponsor?.slug ?? '',
+      l.listPriceMinor === null ? '' : minorToDecimal(l.listPriceMinor, l.currency),
     ]);
   // A leading =, +, - or @ would run as a formula in a spreadsheet: such text cells get a quote mark.
   return Papa.unparse({ fields: [...LEDGER_CSV_COLUMNS], data }, { escapeFormulae: true, newline: '\r\n' });
@@ -87,7 +95,7 @@ const yesNo = (v: string): boolean | null => (/^(yes|y|true|1)$/i.test(v) ? true
 export async function parseLedgerCsv(db: Db, buildId: number, text: string): Promise<Parsed> {
   const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), { header: true, skipEmptyLines: 'greedy' });
   const header = parsed.meta.fields ?? [];
-  const missing = LEDGER_CSV_COLUMNS.filter((c) => !header.includes(c));
+  const missing = LEDGER_CSV_COLUMNS.filter((c) => !header.includes(c) && !OPTIONAL_COLUMNS.includes(c));
   const unknown = header.filter((c) => !(LEDGER_CSV_COLUMNS as readonly string[]).includes(c));
   if (missing.length || unknown.length)
     throw new HttpError(400, 'invalid_request', 'The CSV does not have the ledger’s columns', {
@@ -103,11 +111,14 @@ export async function parseLedgerCsv(db: Db, buildId: number, text: string): Pro
     });
   if (!parsed.data.length) throw new HttpError(400, 'invalid_request', 'The CSV has no rows', { csv: ['no rows under the header'] });
 
-  const [build, episodes, systems] = await Promise.all([
+  const [build, episodes, systems, sponsors] = await Promise.all([
     db.selectFrom('builds').select('currency').where('id', '=', buildId).executeTakeFirstOrThrow(),
     db.selectFrom('episodes').select(['id', 'number']).where('build_id', '=', buildId).where('deleted_at', 'is', null).execute(),
     db.selectFrom('build_systems').select('key').where('build_id', '=', buildId).execute(),
+    db.selectFrom('sponsors').select(['id', 'slug', 'name']).execute(),
   ]);
+  // A sponsor is named by its slug (as exported) or its name.
+  const sponsorByKey = new Map(sponsors.flatMap((s) => [[s.slug.toLowerCase(), s.id] as const, [s.name.toLowerCase(), s.id] as const]));
   const episodeByNumber = new Map(episodes.map((e) => [e.number, e.id]));
   const systemKeys = new Set(systems.map((s) => s.key));
   const out: Parsed = { rows: [], lines: [] };
@@ -137,6 +148,8 @@ export async function parseLedgerCsv(db: Db, buildId: number, text: string): Pro
     if (taxIncluded === null) errors.tax_included = 'yes or no';
     const affiliate = yesNo(cell('affiliate'));
     if (affiliate === null) errors.affiliate = 'yes or no';
+    const sponsorId = cell('sponsor') ? (sponsorByKey.get(cell('sponsor').toLowerCase()) ?? null) : null;
+    if (cell('sponsor') && sponsorId === null) errors.sponsor = 'no such sponsor';
     const candidate = {
       kind: cell('kind'),
       description: cell('description'),
@@ -157,6 +170,9 @@ export async function parseLedgerCsv(db: Db, buildId: number, text: string): Pro
       buyUrl: cell('buy_url') || null,
       affiliate: affiliate ?? false,
       openItemId: null,
+      supportKind: cell('support') || null,
+      sponsorId,
+      listPriceMinor: money('list_price', false),
     };
     const checked = partLineInput.safeParse(candidate);
     const toColumn: Record<string, Column> = {
@@ -169,6 +185,9 @@ export async function parseLedgerCsv(db: Db, buildId: number, text: string): Pro
       fxRate: 'fx_rate',
       avoidedCostMinor: 'avoided_cost',
       buyUrl: 'buy_url',
+      supportKind: 'support',
+      sponsorId: 'sponsor',
+      listPriceMinor: 'list_price',
     };
     if (!checked.success) {
       for (const issue of checked.error.issues) {

@@ -1,6 +1,8 @@
 import { validateChapters } from '../../src/shared/chapters';
 import { writeUpImageIds, writeUpText, type WriteUpDoc } from '../../src/shared/write-up';
 import type { Db } from '../db/kysely';
+import { disclosureLine } from '../../src/shared/disclosure';
+import { episodeDisclosure } from './disclosure';
 
 export interface PublishProblem {
   field: string;
@@ -14,6 +16,8 @@ export interface PublishContext {
   writeUp: WriteUpDoc;
   durationSeconds: number | null;
   chapters: Array<{ startSeconds: number; title: string }>;
+  /** When it is to go out, if not now (scheduling): a paid sponsorship is judged on that day. */
+  publishAt?: Date;
 }
 
 /** One rule an episode must pass to go public; run at "publish now" and again when a schedule fires. */
@@ -61,11 +65,59 @@ const picturesHaveAltText: PublishCheck = async (ctx, db) => {
   return problems;
 };
 
-/** Every publish rule; later features add theirs here (the sponsors' disclosure rule, for one). */
-export const publishChecks: PublishCheck[] = [hasTitle, hasWriteUp, chaptersInOrder, picturesHaveAltText];
+/** A supported line names both its sponsor and the kind of support (the disclosure says who gave what). */
+const supportComplete: PublishCheck = async (ctx, db) => {
+  const lines = await db
+    .selectFrom('part_lines')
+    .select(['id', 'position', 'description', 'support_kind', 'sponsor_id'])
+    .where('episode_id', '=', ctx.episodeId)
+    .where((eb) => eb.or([eb('support_kind', 'is not', null), eb('sponsor_id', 'is not', null)]))
+    .orderBy('position')
+    .execute();
+  const all = await db
+    .selectFrom('part_lines')
+    .select(['id'])
+    .where('episode_id', '=', ctx.episodeId)
+    .orderBy('position')
+    .orderBy('id')
+    .execute();
+  const number = new Map(all.map((l, i) => [l.id, i + 1]));
+  return lines.flatMap((l): PublishProblem[] => {
+    const name = `Part line ${number.get(l.id)} “${l.description}”`;
+    if (l.sponsor_id === null)
+      return [{ field: `partLines.${l.id}.sponsorId`, message: `${name} is marked ${l.support_kind}: name its sponsor` }];
+    if (l.support_kind === null)
+      return [{ field: `partLines.${l.id}.supportKind`, message: `${name} names a sponsor: say what kind of support it was` }];
+    return [];
+  });
+};
+
+/**
+ * A supported episode needs the creator's word that the video itself discloses the support too
+ * (UK CAP Code / ASA influencers' guide: the ad is identifiable wherever it is seen; US FTC
+ * Endorsement Guides, 16 CFR Part 255: the disclosure is in the video, not only beside it).
+ */
+const videoDisclosureConfirmed: PublishCheck = async (ctx, db) => {
+  const d = await episodeDisclosure(db, ctx.episodeId, { at: ctx.publishAt });
+  if (!d) return [];
+  const e = await db.selectFrom('episodes').select('video_disclosure_confirmed').where('id', '=', ctx.episodeId).executeTakeFirstOrThrow();
+  return e.video_disclosure_confirmed
+    ? []
+    : [{ field: 'videoDisclosureConfirmed', message: `Confirm that the video discloses this too: “${disclosureLine(d)}”` }];
+};
+
+/** Every publish rule; later features add theirs here. */
+export const publishChecks: PublishCheck[] = [
+  hasTitle,
+  hasWriteUp,
+  chaptersInOrder,
+  picturesHaveAltText,
+  supportComplete,
+  videoDisclosureConfirmed,
+];
 
 /** Runs every rule against the episode as it is stored now. */
-export async function runPublishChecks(db: Db, episodeId: number): Promise<PublishProblem[]> {
+export async function runPublishChecks(db: Db, episodeId: number, publishAt?: Date): Promise<PublishProblem[]> {
   const e = await db
     .selectFrom('episodes')
     .select(['id', 'build_id', 'title', 'write_up', 'duration_seconds'])
@@ -84,6 +136,7 @@ export async function runPublishChecks(db: Db, episodeId: number): Promise<Publi
     writeUp: e.write_up as WriteUpDoc,
     durationSeconds: e.duration_seconds,
     chapters: chapters.map((c) => ({ startSeconds: c.start_seconds, title: c.title })),
+    publishAt,
   };
   const problems: PublishProblem[] = [];
   for (const check of publishChecks) problems.push(...(await check(ctx, db)));

@@ -100,7 +100,14 @@ describe('demo seed', () => {
     await runSeed(handle.db);
     expect(await snapshot()).toEqual(first);
     const runs = await handle.db.selectFrom('seed_runs').select(['section']).orderBy('section').execute();
-    expect(runs.map((r) => r.section)).toEqual(['demo-accounts', 'demo-builds', 'demo-figures', 'demo-followers', 'demo-parts']);
+    expect(runs.map((r) => r.section)).toEqual([
+      'demo-accounts',
+      'demo-builds',
+      'demo-figures',
+      'demo-followers',
+      'demo-parts',
+      'demo-sponsors',
+    ]);
 
     // The followers issue's demo: posts in every state, replies, one adopted suggestion with its note,
     // one reported post, follows and a few notices in the outbox; a third run adds nothing.
@@ -134,6 +141,43 @@ describe('demo seed', () => {
       handle.db,
     );
     expect(over.rows.map((r) => r.key)).toEqual(['cooling']);
+
+    // The sponsors issue's demo: two sponsors with a member each, a linked supplier, gifted and
+    // discounted lines with list prices on both builds, one paid sponsorship, one affiliate link, and
+    // every published or scheduled episode that needs a disclosure confirmed, so it passes the checks.
+    const sponsorRows = async () => ({
+      sponsors: await handle.db.selectFrom('sponsors').select(['id', 'slug', 'website']).orderBy('slug').execute(),
+      members: (await handle.db.selectFrom('sponsor_members').select('id').execute()).length,
+      linked: (await handle.db.selectFrom('sponsor_suppliers').select('supplier_id').execute()).length,
+      sponsorships: await handle.db.selectFrom('sponsorships').select(['build_id', 'kind', 'starts_on']).orderBy('id').execute(),
+      supported: await handle.db
+        .selectFrom('part_lines')
+        .select(['build_id', 'support_kind', 'sponsor_id', 'list_price_minor', 'unit_price_minor'])
+        .where('support_kind', 'is not', null)
+        .orderBy('id')
+        .execute(),
+    });
+    const sponsorDemo = await sponsorRows();
+    expect(sponsorDemo.sponsors.map((s) => s.slug)).toEqual(['quillon-motor-parts', 'tinderbox-tools']);
+    expect(sponsorDemo.sponsors.every((s) => s.website?.endsWith('.example'))).toBe(true);
+    expect(sponsorDemo.members).toBe(2);
+    expect(sponsorDemo.linked).toBe(1);
+    expect(sponsorDemo.sponsorships.filter((s) => s.kind === 'paid')).toHaveLength(1);
+    expect(new Set(sponsorDemo.supported.map((l) => l.support_kind))).toEqual(new Set(['gifted', 'discounted']));
+    expect(new Set(sponsorDemo.supported.map((l) => l.build_id)).size).toBe(2);
+    expect(sponsorDemo.supported.every((l) => l.sponsor_id !== null && l.list_price_minor! > l.unit_price_minor)).toBe(true);
+    expect(lines.filter((l) => l.affiliate)).toHaveLength(1);
+    const { runPublishChecks } = await import('../../server/services/publish-checks');
+    const { episodeDisclosure } = await import('../../server/services/disclosure');
+    const out = first.episodes.filter((e) => e.status !== 'draft');
+    let disclosed = 0;
+    for (const e of out) {
+      expect(await runPublishChecks(handle.db, e.id), `episode ${e.id}`).toEqual([]);
+      if (await episodeDisclosure(handle.db, e.id)) disclosed += 1;
+    }
+    expect(disclosed).toBeGreaterThanOrEqual(3);
+    await runSeed(handle.db);
+    expect(await sponsorRows()).toEqual(sponsorDemo);
 
     // The figures issue's demo: mixed units, one by hand below the wrench's range, one weaker substitute, one torque plus angle.
     const figures = (

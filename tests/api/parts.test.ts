@@ -311,7 +311,7 @@ describe('CSV', () => {
     const csv = await res.text();
     expect(csv).toContain("'=SUM(A1) -20 mm spacer");
     expect(csv.split('\r\n')[0]).toBe(
-      'episode,kind,description,part_number,supplier,system,at,source,status,quantity,unit,unit_price,currency,tax_rate,tax_included,fx_rate,avoided_cost,buy_url,affiliate',
+      'episode,kind,description,part_number,supplier,system,at,source,status,quantity,unit,unit_price,currency,tax_rate,tax_included,fx_rate,avoided_cost,buy_url,affiliate,support,sponsor,list_price',
     );
     // Import into a second build with the same episodes and systems, then export again.
     const other = await setUpBuild('csv-owner', 'csv-owner@example.test', 'csv-build');

@@ -144,6 +144,24 @@ describe('support on part lines', () => {
   });
 });
 
+describe('the ledger CSV', () => {
+  it('exports support and imports it back, naming an unknown sponsor on its row', async () => {
+    const header =
+      'episode,kind,description,part_number,supplier,system,at,source,status,quantity,unit,unit_price,currency,tax_rate,tax_included,fx_rate,avoided_cost,buy_url,affiliate,support,sponsor,list_price';
+    const number = (await app.deps.db.selectFrom('episodes').select('number').where('id', '=', episodeId).executeTakeFirstOrThrow()).number;
+    const good = `${number},part,Clutch fork boot,,,,,new,arrived,1,each,4.00,GBP,0,yes,,,,no,discounted,larchmere-spares,5.50`;
+    const bad = `${number},part,Release bearing,,,,,new,arrived,1,each,0,GBP,0,yes,,,,no,gifted,no-such-sponsor,9.00`;
+    const preview = await owner.post(`/api/builds/${buildId}/ledger/import`, { csv: [header, good, bad].join('\n'), dryRun: true });
+    expect(preview.status).toBe(200);
+    expect(preview.body.rows.map((r: { errors: Record<string, string> }) => Object.keys(r.errors))).toEqual([[], ['sponsor']]);
+    const done = await owner.post(`/api/builds/${buildId}/ledger/import`, { csv: [header, good].join('\n'), dryRun: false });
+    expect(done.status, JSON.stringify(done.body)).toBe(201);
+    const res = await fetch(`${app.baseUrl}/api/builds/${buildId}/ledger.csv`, { headers: { cookie: owner.cookie! } });
+    const row = (await res.text()).split('\r\n').find((r) => r.includes('Clutch fork boot'));
+    expect(row?.endsWith(',discounted,larchmere-spares,5.50')).toBe(true);
+  });
+});
+
 describe('sponsorships', () => {
   it('lets the owner add, change, list and remove them; others may not', async () => {
     const body = { sponsorId: sponsorB, kind: 'paid', startsOn: '2026-11-01', endsOn: '2027-01-31' };

@@ -19,7 +19,7 @@ import { TEST_DIST_DIR } from '../setup/build-global';
 // totals and then the build's on the ledger page, and exports the ledger as CSV.
 
 const CSV_HEADER =
-  'episode,kind,description,part_number,supplier,system,at,source,status,quantity,unit,unit_price,currency,tax_rate,tax_included,fx_rate,avoided_cost,buy_url,affiliate';
+  'episode,kind,description,part_number,supplier,system,at,source,status,quantity,unit,unit_price,currency,tax_rate,tax_included,fx_rate,avoided_cost,buy_url,affiliate,support,sponsor,list_price';
 
 let app: TestApp;
 let browser: Browser;

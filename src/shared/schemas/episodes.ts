@@ -92,6 +92,8 @@ export const episode = z.object({
   status: z.enum(EPISODE_STATUSES),
   publishAt: z.string().nullable(),
   publishedAt: z.string().nullable(),
+  /** Why a scheduled episode went back to draft when its time came (the publish checks it failed then). */
+  publishError: z.string().nullable(),
   version: z.number().int(),
   needsCaution: z.boolean(),
   deletedAt: z.string().nullable(),

@@ -9,7 +9,7 @@ export function publishProblemLines(err: unknown): string[] {
   for (const [key, messages] of Object.entries(err.fields ?? {})) {
     const row = /^chapters\.(\d+)/.exec(key);
     const field = draftFieldOf(key);
-    const where = row ? `Chapter ${Number(row[1]) + 1}` : field ? FIELD_LABELS[field] : key;
+    const where = row ? `Chapter ${Number(row[1]) + 1}` : key.startsWith('partLines.') ? 'Parts' : field ? FIELD_LABELS[field] : key;
     for (const m of messages) lines.push(`${where.charAt(0).toUpperCase()}${where.slice(1)}: ${m}`);
   }
   return lines;

@@ -26,6 +26,7 @@ export function makeEpisode(overrides: Partial<Episode> = {}): Episode {
     status: 'draft',
     publishAt: null,
     publishedAt: null,
+    publishError: null,
     version: 1,
     needsCaution: false,
     deletedAt: null,

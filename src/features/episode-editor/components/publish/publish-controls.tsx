@@ -76,6 +76,12 @@ export function PublishControls({ episode, commit }: PublishControlsProps) {
           {episode.status === 'published' && episode.publishedAt ? `Published on ${when(episode.publishedAt)}.` : null}
         </p>
       </div>
+      {episode.status === 'draft' && episode.publishError ? (
+        <div role="alert" className="mt-3 border border-l-4 border-rule border-l-oxide-2 bg-card px-4 py-3">
+          <p className="font-semibold text-ink">It was scheduled but did not go out: the checks failed at that time.</p>
+          <p className="mt-1 text-ink-2">{episode.publishError}</p>
+        </div>
+      ) : null}
       <div className="mt-4 space-y-4">
         {episode.status !== 'published' ? (
           <>

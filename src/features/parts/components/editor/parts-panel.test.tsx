@@ -150,4 +150,39 @@ describe('PartsPanel', () => {
     enterIn('Description');
     await waitFor(() => expect(server.calls('POST')[0]?.body).toMatchObject({ supplierId: 1 }));
   });
+
+  it('suggests the sponsor behind a linked supplier, and credits it only when the creator accepts', async () => {
+    const server = setup();
+    await screen.findByText(/No part lines yet/);
+    const box = newRow().getByRole('combobox', { name: 'Supplier' });
+    fireEvent.change(box, { target: { value: 'quill' } });
+    await screen.findByRole('option', { name: /Quillon Fasteners/ });
+    fireEvent.keyDown(box, { key: 'Enter' });
+    await newRow().findByText(/is backed by/);
+    // Not set by itself: the sponsor cell still says None.
+    expect((newRow().getByLabelText('Sponsor') as HTMLSelectElement).value).toBe('');
+    fireEvent.click(newRow().getByRole('button', { name: 'Credit Quillon Works' }));
+    await waitFor(() => expect((newRow().getByLabelText('Sponsor') as HTMLSelectElement).value).toBe('3'));
+    expect(newRow().queryByText(/is backed by/)).toBeNull();
+    type('Description', 'Caliper bolts');
+    type('Support', 'discounted');
+    type('Unit price', '4.00');
+    type('List price (unit)', '5.50');
+    enterIn('Description');
+    await waitFor(() =>
+      expect(server.calls('POST')[0]?.body).toMatchObject({ supplierId: 2, sponsorId: 3, supportKind: 'discounted', listPriceMinor: 550 }),
+    );
+  });
+
+  it('says on the list price cell when a discounted price is not below it', async () => {
+    const server = setup();
+    await screen.findByText(/No part lines yet/);
+    type('Description', 'Caliper bolts');
+    type('Support', 'discounted');
+    type('Unit price', '6.00');
+    type('List price (unit)', '5.50');
+    enterIn('Description');
+    await newRow().findByText(/list price cannot be below the price paid/i);
+    expect(server.calls('POST')).toHaveLength(0);
+  });
 });
