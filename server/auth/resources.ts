@@ -105,3 +105,9 @@ export async function postResource(deps: AppDeps, params: { postId: number }): P
       }
     : null;
 }
+
+/** The sponsor organisation named by `:slug`, for its summary (the policy hides it from non-members). */
+export async function sponsorBySlugResource(deps: AppDeps, params: { slug: string }): Promise<Resource | null> {
+  const s = await deps.db.selectFrom('sponsors').select('id').where('slug', '=', params.slug).executeTakeFirst();
+  return s ? { kind: 'sponsor', id: s.id } : null;
+}
