@@ -5,6 +5,8 @@ import type { ApiClient } from '../lib/api-client';
 import { AccountBuildsPage } from '../routes/account-builds';
 import { AccountSettingsPage } from '../routes/account-settings';
 import { adminAccountsLoader, AdminAccountsPage } from '../routes/admin-accounts';
+import { adminSponsorLoader, AdminSponsorPage } from '../routes/admin-sponsor';
+import { adminSponsorsLoader, AdminSponsorsPage } from '../routes/admin-sponsors';
 import { adminSuppliersLoader, AdminSuppliersPage } from '../routes/admin-suppliers';
 import { buildPageLoader, BuildPage } from '../routes/build-page';
 import { buildsDirectoryLoader, BuildsDirectoryPage } from '../routes/builds-directory';
@@ -121,6 +123,8 @@ export function createRoutes({ queryClient, api }: RouteDeps): RouteObject[] {
         { path: 'admin/accounts', id: 'admin-accounts', loader: adminAccountsLoader(deps), Component: AdminAccountsPage },
         { path: 'workshop', id: 'workshop', Component: WorkshopPage },
         { path: 'admin/suppliers', id: 'admin-suppliers', loader: adminSuppliersLoader(deps), Component: AdminSuppliersPage },
+        { path: 'admin/sponsors', id: 'admin-sponsors', loader: adminSponsorsLoader(deps), Component: AdminSponsorsPage },
+        { path: 'admin/sponsors/:sponsorId', id: 'admin-sponsor', loader: adminSponsorLoader(deps), Component: AdminSponsorPage },
         { path: '*', id: NOT_FOUND_ROUTE_ID, Component: NotFound },
       ],
     },

@@ -5,6 +5,7 @@ import { AccountMenu, type AccountMenuItem } from '../features/accounts/componen
 import { accountPaths } from '../features/accounts/paths';
 import { adminPaths } from '../features/admin/paths';
 import { HeaderNotices } from '../features/following/components/header-notices';
+import { sponsorPaths } from '../features/sponsors/paths';
 import { workbenchPaths } from '../features/workbench/paths';
 import { Notice } from '../components/ui/notice';
 import { StateMessage } from '../components/ui/state-message';
@@ -56,10 +57,17 @@ export function accountMenuItems(account: Account): AccountMenuItem[] {
   if (account.builds.length) items.splice(1, 0, { label: 'Inbox', to: '/inbox' });
   items.push({ label: 'Account settings', to: accountPaths.settings() }, { label: 'Notice settings', to: '/account/notices' });
   if (account.builds.some((b) => b.role === 'owner')) items.push({ label: 'Build teams', to: accountPaths.builds() });
+  // A member of several organisations gets one summary entry each, named.
+  for (const s of account.sponsors)
+    items.push({
+      label: account.sponsors.length > 1 ? `Sponsor summary: ${s.sponsorName}` : 'Sponsor summary',
+      to: sponsorPaths.summary(s.sponsorSlug),
+    });
   if (account.isAdmin)
     items.push(
       { label: 'Accounts', to: adminPaths.accounts() },
       { label: 'Suppliers', to: adminPaths.suppliers() },
+      { label: 'Sponsor organisations', to: adminPaths.sponsors() },
       { label: 'Moderation queue', to: '/moderation' },
     );
   return items;
