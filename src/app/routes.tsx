@@ -23,6 +23,8 @@ import { InvitationAcceptPage } from '../routes/invitation-accept';
 import { NotFound } from '../routes/not-found';
 import { primeSession, requireAccount } from '../routes/route-guards';
 import { searchPageLoader, SearchPage } from '../routes/search-page';
+import { sponsorSummaryLoader, SponsorSummaryPage } from '../routes/sponsor-summary';
+import { teamSponsorSummaryLoader, TeamSponsorSummaryPage } from '../routes/team-sponsor-summary';
 import { SignInPage } from '../routes/sign-in';
 import { SignInLinkPage } from '../routes/sign-in-link';
 import { workbenchLoader, WorkbenchPage } from '../routes/workbench';
@@ -107,6 +109,13 @@ export function createRoutes({ queryClient, api }: RouteDeps): RouteObject[] {
           loader: buildLedgerLoader(deps),
           Component: BuildLedgerPage,
         },
+        {
+          path: 'workbench/builds/:buildId/sponsors/:sponsorId',
+          id: 'team-sponsor-summary',
+          loader: teamSponsorSummaryLoader(deps),
+          Component: TeamSponsorSummaryPage,
+        },
+        { path: 'sponsors/:slug', id: 'sponsor-summary', loader: sponsorSummaryLoader(deps), Component: SponsorSummaryPage },
         // A lazy module (the editor and Tiptap load only here); it reads its data through hooks, so the
         // loader only sends visitors to sign in.
         {

@@ -155,7 +155,7 @@ function HeaderSearch() {
 
 export function SiteHeader() {
   return (
-    <header className="on-ink bg-ink text-paper">
+    <header className="on-ink bg-ink text-paper print:hidden">
       <div className="page-wrap flex flex-wrap items-center gap-x-7 gap-y-1 py-2">
         <Link
           to={paths.home()}
@@ -186,7 +186,7 @@ export function SiteHeader() {
 
 export function SiteFooter() {
   return (
-    <footer className="mt-16 border-t border-rule bg-paper-2">
+    <footer className="mt-16 border-t border-rule bg-paper-2 print:hidden">
       <div className="page-wrap py-6 text-[15px] text-ink-2">
         <p className="font-serif font-bold text-ink">{PRODUCT_NAME}</p>
         <p className="mt-1 max-w-measure">
