@@ -12,6 +12,7 @@ import {
   type TrackedPage,
 } from '../helpers/browser';
 import { createEpisode, createUser } from '../helpers/factories';
+import { signInByEmail, TestClient } from '../helpers/http-client';
 import { addSponsorMember, createPartLine, createSponsor } from '../helpers/sponsors';
 import { startTestApp, type TestApp } from '../helpers/test-app';
 import { TEST_DIST_DIR } from '../setup/build-global';
@@ -146,5 +147,45 @@ describe('sponsor summary', () => {
     await page.getByText('2 lines; page 1 of 1.').waitFor();
     expect(tracked.consoleErrors).toEqual([]);
     expectOnlyLoopback(tracked);
+  });
+
+  it('admin screens: add an organisation, link a supplier, invite a member, confirm before removing', async () => {
+    const db = app.deps.db;
+    await createUser(db, { handle: 'ada-admin', display_name: 'Ada Admin', email: 'ada@example.test', is_admin: true });
+    await db.insertInto('suppliers').values({ name: 'Harwick Lane Spares', website: null, created_by: null }).execute();
+    const client = new TestClient(app.baseUrl);
+    await signInByEmail(client, db, 'ada@example.test');
+    const admin = await openPage(browser, { signedIn: { cookie: client.cookie!, url: app.baseUrl } });
+    try {
+      let page = await visit(admin, `${app.baseUrl}/admin/sponsors`);
+      await page.getByRole('textbox', { name: 'Name' }).fill('Gauge & Dial');
+      await page.getByRole('textbox', { name: /Address slug/ }).fill('gauge-and-dial');
+      await page.getByRole('button', { name: 'Add organisation' }).click();
+      await page.getByRole('link', { name: 'Gauge & Dial' }).click();
+      await page.waitForURL(/\/admin\/sponsors\/\d+$/);
+      page = await visit(admin, page.url());
+      await page.getByRole('searchbox', { name: 'Find a supplier to link' }).fill('Harwick');
+      await page.getByRole('button', { name: 'Link Harwick Lane Spares to Gauge & Dial' }).click();
+      await page.getByRole('button', { name: 'Unlink Harwick Lane Spares' }).waitFor();
+      await page.getByRole('textbox', { name: 'Invite a member by e-mail' }).fill('new-member@example.test');
+      await page.getByRole('button', { name: 'Send invitation' }).click();
+      await page.getByText('Invitation sent to new-member@example.test.').waitFor();
+      // Removing asks first; cancelling keeps the link.
+      await page.getByRole('button', { name: 'Unlink Harwick Lane Spares' }).click();
+      const dialog = page.getByRole('dialog', { name: /Unlink Harwick Lane Spares/ });
+      await dialog.waitFor();
+      await checkAccessibility(page);
+      await dialog.getByRole('button', { name: 'Keep it' }).click();
+      expect(await db.selectFrom('sponsor_suppliers').selectAll().execute()).toHaveLength(1);
+      await page.getByRole('button', { name: 'Unlink Harwick Lane Spares' }).click();
+      await dialog.getByRole('button', { name: 'Unlink supplier' }).click();
+      await page.getByText('No linked suppliers.').waitFor();
+      expect(await db.selectFrom('sponsor_suppliers').selectAll().execute()).toHaveLength(0);
+      await checkAccessibility(page);
+      await checkPhoneWidth(page);
+      expect(admin.consoleErrors).toEqual([]);
+    } finally {
+      await admin.close();
+    }
   });
 });
