@@ -10,6 +10,8 @@ export default defineConfig({
     // Fonts are small enough as files; never inline them as data URLs (CSP and caching).
     assetsInlineLimit: 0,
     sourcemap: false,
+    // `.vite/manifest.json`: `npm run bench` reads the episode route's first-load JavaScript from it.
+    manifest: true,
   },
   server: {
     host: '127.0.0.1',

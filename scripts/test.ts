@@ -1,5 +1,5 @@
-// `npm test`: a fresh test database in a cluster of its own, then typecheck, lint, unit, API and
-// browser suites. Prints one summary whose last line is `N passed, N failed[, N skipped]`.
+// `npm test`: a fresh test database in a cluster of its own, then typecheck, lint, unit, API,
+// two-process, fault and browser suites. Prints one summary whose last line is `N passed, N failed[, N skipped]`.
 import { spawn } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import path from 'node:path';
@@ -92,7 +92,8 @@ async function main() {
     const results: StepResult[] = [];
     results.push(await check('typecheck', bin('tsc'), ['--noEmit'], env));
     results.push(await check('lint', bin('eslint'), ['.', '--max-warnings=0'], env));
-    for (const project of ['unit', 'api', 'e2e']) results.push(await vitest(project, env));
+    // `faults` starts and restarts a PostgreSQL cluster of its own, so it runs alone, between the others.
+    for (const project of ['unit', 'api', 'two-processes', 'faults', 'e2e']) results.push(await vitest(project, env));
 
     const total = results.reduce((a, r) => ({ passed: a.passed + r.passed, failed: a.failed + r.failed, skipped: a.skipped + r.skipped }), {
       passed: 0,

@@ -7,6 +7,8 @@ import { actorMiddleware } from './auth/actor';
 import { githubAuthRouter } from './auth/github';
 import { sessionMiddleware } from './auth/session';
 import { csrf } from './http/csrf';
+import { loadShed } from './http/load-shed';
+import { QueryCounter } from './db/query-count';
 import { apiNotFound, errorHandler } from './http/error-handler';
 import { buildApiRouter } from './http/registry';
 import { routeRegistry } from './routes';
@@ -69,6 +71,8 @@ export function createApp(deps: AppDeps): Express {
   );
 
   app.set('trust proxy', trustProxy(config.TRUST_PROXY));
+  if (config.BENCH_QUERY_COUNT) app.use(new QueryCounter(deps.pool).router());
+  app.use(loadShed(deps.pool, config.DATABASE_QUEUE_MAX));
   const sessions = sessionMiddleware(deps.pool, config);
   const actor = actorMiddleware(deps.db);
 

@@ -15,6 +15,10 @@ const schema = z
     LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
     DATABASE_URL: z.string().regex(/^postgres(ql)?:\/\//, 'must be a postgres:// connection URL'),
     DATABASE_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
+    /** Requests waiting for a pooled connection beyond which new requests are shed with 503 (server/http/load-shed.ts). */
+    DATABASE_QUEUE_MAX: z.coerce.number().int().min(0).max(100_000).default(400),
+    /** Bench mode: count SQL queries and serve the count at GET /__bench/queries (never in normal use). */
+    BENCH_QUERY_COUNT: bool.default(false),
     SESSION_SECRET: z.string().min(32, 'must be at least 32 characters').default(DEV_SESSION_SECRET),
     SESSION_MAX_AGE_DAYS: z.coerce.number().int().min(1).max(365).default(30),
     /** Express's trust-proxy setting: `loopback`, a hop count, or a list of addresses. */

@@ -1,6 +1,6 @@
 // A PostgreSQL cluster of the project's own, on 127.0.0.1, in a data folder the `postgres`
 // system user can reach (PostgreSQL refuses to run as root).
-import { execFileSync, spawnSync } from 'node:child_process';
+import { execFileSync, spawn, spawnSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import { chownSync, existsSync, mkdirSync, readdirSync, writeFileSync } from 'node:fs';
 import net from 'node:net';
@@ -153,4 +153,24 @@ export async function recreateDatabase(adminUrl: string, name: string): Promise<
   } finally {
     await client.end();
   }
+}
+
+/**
+ * For fault tests: a fast shutdown of a running cluster (`stop`), or starting it again with the
+ * options it last ran with (`start`, through `pg_ctl restart`, which reads postmaster.opts).
+ * Asynchronous, so an app in the same process keeps answering meanwhile.
+ */
+export function controlCluster(dataDir: string, action: 'stop' | 'start'): Promise<void> {
+  const args =
+    action === 'stop'
+      ? ['-D', dataDir, '-m', 'fast', '-w', 'stop']
+      : ['-D', dataDir, '-l', path.join(path.dirname(dataDir), 'postgres.log'), '-w', '-t', '60', 'restart'];
+  const full = path.join(binDir(), 'pg_ctl');
+  const [cmd, argv] = isRoot ? ['runuser', ['-u', 'postgres', '--', full, ...args]] : [full, args];
+  return new Promise((resolve, reject) => {
+    const child = spawn(cmd, argv, { stdio: ['ignore', 'ignore', 'pipe'] });
+    let err = '';
+    child.stderr.on('data', (c: Buffer) => (err += c.toString()));
+    child.on('exit', (code) => (code === 0 ? resolve() : reject(new Error(`pg_ctl ${action} failed (${code}): ${err}`))));
+  });
 }

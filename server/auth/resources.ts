@@ -111,3 +111,9 @@ export async function sponsorBySlugResource(deps: AppDeps, params: { slug: strin
   const s = await deps.db.selectFrom('sponsors').select('id').where('slug', '=', params.slug).executeTakeFirst();
   return s ? { kind: 'sponsor', id: s.id } : null;
 }
+
+/** The build a sponsorship (`:sponsorshipId`) belongs to. */
+export async function sponsorshipBuildResource(deps: AppDeps, params: { sponsorshipId: number }): Promise<Resource | null> {
+  const s = await deps.db.selectFrom('sponsorships').select('build_id').where('id', '=', params.sponsorshipId).executeTakeFirst();
+  return s ? buildResource(deps, { buildId: s.build_id }) : null;
+}

@@ -168,6 +168,15 @@ export interface LineRow {
   open_item_title: string | null;
   receipt_media_id: number | null;
   receipt_content_type: string | null;
+  support_kind: 'gifted' | 'discounted' | 'paid' | null;
+  sponsor_id: number | null;
+  sponsor_slug: string | null;
+  sponsor_name: string | null;
+  list_price_minor: number | null;
+  value_given_minor: number;
+  suggested_sponsor_id: number | null;
+  suggested_sponsor_slug: string | null;
+  suggested_sponsor_name: string | null;
   net_minor: number;
   tax_minor: number;
   gross_minor: number;
@@ -190,9 +199,14 @@ export async function listLines(
   const sort = SORT_COLUMNS[q.sort ?? 'episode'];
   const dir = q.dir === 'desc' ? 'desc' : 'asc';
   const { rows } = await sql<LineRow>`
-    select x.*, s.name as supplier_name, o.title as open_item_title, rm.content_type as receipt_content_type, count(*) over ()::int as total
+    select x.*, s.name as supplier_name, o.title as open_item_title, rm.content_type as receipt_content_type,
+           sp.slug as sponsor_slug, sp.name as sponsor_name, ss.sponsor_id as suggested_sponsor_id,
+           ssp.slug as suggested_sponsor_slug, ssp.name as suggested_sponsor_name, count(*) over ()::int as total
       from (${convertedLines(scope)}) x
       left join suppliers s on s.id = x.supplier_id
+      left join sponsors sp on sp.id = x.sponsor_id
+      left join sponsor_suppliers ss on ss.supplier_id = x.supplier_id
+      left join sponsors ssp on ssp.id = ss.sponsor_id
       left join open_items o on o.id = x.open_item_id
       left join media rm on rm.id = x.receipt_media_id
      where ${ledgerFilter(q)}

@@ -35,6 +35,15 @@ export function presentPartLine(r: LineRow): PartLine {
       r.receipt_media_id !== null && r.receipt_content_type !== null
         ? { id: r.receipt_media_id, contentType: r.receipt_content_type }
         : null,
+    supportKind: r.support_kind,
+    sponsor:
+      r.sponsor_id !== null && r.sponsor_name !== null ? { id: r.sponsor_id, slug: r.sponsor_slug ?? '', name: r.sponsor_name } : null,
+    listPriceMinor: r.list_price_minor,
+    valueGivenMinor: r.value_given_minor,
+    suggestedSponsor:
+      r.suggested_sponsor_id !== null && r.suggested_sponsor_name !== null
+        ? { id: r.suggested_sponsor_id, slug: r.suggested_sponsor_slug ?? '', name: r.suggested_sponsor_name }
+        : null,
     amounts: { netMinor: r.net_minor, taxMinor: r.tax_minor, grossMinor: r.gross_minor },
     buildAmounts:
       r.b_gross === null ? null : { netMinor: r.b_net ?? 0, taxMinor: r.b_tax ?? 0, grossMinor: r.b_gross, avoidedMinor: r.b_avoided },

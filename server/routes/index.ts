@@ -16,6 +16,7 @@ import { healthRoutes } from './health';
 import { invitationRoutes } from './invitations';
 import { sessionRoutes } from './session';
 import { sponsorAdminRoutes, sponsorSummaryRoutes } from './sponsors';
+import { sponsorshipRoutes } from './sponsorships';
 
 /** The route registry: every API route, in one list that the authorisation matrix and fuzzers read. */
 export const routeRegistry: readonly RouteSpec[] = [
@@ -37,4 +38,5 @@ export const routeRegistry: readonly RouteSpec[] = [
   ...followingRoutes,
   ...sponsorAdminRoutes,
   ...sponsorSummaryRoutes,
+  ...sponsorshipRoutes,
 ];

@@ -68,6 +68,10 @@ export async function lineValues(trx: Trx, buildId: number, line: PartLineInput,
       .executeTakeFirst();
     if (!r) problems.receiptMediaId = 'not a receipt of this build';
   }
+  if (line.sponsorId !== null) {
+    const sp = await trx.selectFrom('sponsors').select('id').where('id', '=', line.sponsorId).executeTakeFirst();
+    if (!sp) problems.sponsorId = 'no such sponsor';
+  }
   if (Object.keys(problems).length) throw invalid(problems, prefix);
   return {
     kind: line.kind,
@@ -90,6 +94,9 @@ export async function lineValues(trx: Trx, buildId: number, line: PartLineInput,
     affiliate: line.affiliate,
     open_item_id: line.openItemId,
     receipt_media_id: line.receiptMediaId,
+    support_kind: line.supportKind,
+    sponsor_id: line.sponsorId,
+    list_price_minor: line.listPriceMinor,
   };
 }
 
@@ -152,6 +159,9 @@ export async function updatePartLine(db: Db, lineId: number, changes: Partial<Pa
       affiliate: current.affiliate,
       openItemId: current.open_item_id,
       receiptMediaId: current.receipt_media_id,
+      supportKind: current.support_kind,
+      sponsorId: current.sponsor_id,
+      listPriceMinor: current.list_price_minor,
       ...changes,
     };
     // A line moved into the build's own currency drops its rate, and out of it needs one.

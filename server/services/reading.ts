@@ -5,11 +5,12 @@ import type { BuildCard, BuildOverview, CreatorPage, EpisodeReading } from '../.
 import type { BuildCardRow } from '../db/reading.queries';
 import { isPublishedEpisode, listCreatorBuilds } from '../db/reading.queries';
 import { listLatestEpisodes } from '../db/episodes.queries';
-import { figureSystemKeys } from './figures';
 import type { Db } from '../db/kysely';
 import { presentEpisodeListItem } from '../presenters/episodes';
 import { presentImage } from '../presenters/media';
-import { buildCoverRow, episodePictureRows } from './media/pictures';
+import { buildCoverRow } from './media/pictures';
+import { findEpisodeReading } from '../db/episode-reading.queries';
+import { buildSponsorCredits } from './sponsorships';
 
 const iso = (d: Date | string | null): string | null => (d === null ? null : new Date(d).toISOString());
 const hours = (minutes: number | null): number | null => (minutes === null ? null : minutes / 60);
@@ -54,7 +55,7 @@ export async function getBuildOverview(db: Db, buildId: number): Promise<BuildOv
     .where('b.id', '=', buildId)
     .executeTakeFirst();
   if (!b) return null;
-  const [cover, editors, systems, episodes, openItems] = await Promise.all([
+  const [cover, editors, systems, episodes, openItems, sponsors] = await Promise.all([
     buildCoverRow(db, buildId),
     db
       .selectFrom('build_members as m')
@@ -105,8 +106,10 @@ export async function getBuildOverview(db: Db, buildId: number): Promise<BuildOv
       .orderBy('e.number')
       .orderBy('o.id')
       .execute(),
+    buildSponsorCredits(db, buildId),
   ]);
   return {
+    sponsors,
     id: b.id,
     slug: b.slug,
     title: b.title,
@@ -142,103 +145,20 @@ export async function getBuildOverview(db: Db, buildId: number): Promise<BuildOv
   };
 }
 
-/** The episode page's data; the caller has checked the reader may see the episode. */
+/** The episode page's data, in one SQL round trip; the caller has checked the reader may see the episode. */
 export async function getEpisodeReading(db: Db, episodeId: number): Promise<EpisodeReading | null> {
-  const e = await db
-    .selectFrom('episodes as e')
-    .innerJoin('builds as b', 'b.id', 'e.build_id')
-    .innerJoin('users as u', 'u.id', 'b.owner_id')
-    .select([
-      'e.id',
-      'e.build_id',
-      'e.number',
-      'e.slug',
-      'e.title',
-      'e.summary',
-      'e.status',
-      'e.published_at',
-      'e.updated_at',
-      'e.video_url',
-      'e.duration_seconds',
-      'e.minutes_worked',
-      'e.raised_vehicle',
-      'e.write_up_html',
-      'b.slug as build_slug',
-      'b.title as build_title',
-      'b.visibility',
-      'b.vehicle_kind',
-      'b.vehicle_make',
-      'b.vehicle_model',
-      'b.vehicle_year',
-      'b.video_link_pattern',
-      'u.handle',
-      'u.display_name',
-    ])
-    .where('e.id', '=', episodeId)
-    .executeTakeFirst();
+  const e = await findEpisodeReading(db, episodeId);
   if (!e) return null;
-  const neighbour = (dir: 'previous' | 'next') =>
-    db
-      .selectFrom('episodes as e')
-      .select(['e.id', 'e.number', 'e.slug', 'e.title'])
-      .where('e.build_id', '=', e.build_id)
-      .where(isPublishedEpisode)
-      .where('e.number', dir === 'previous' ? '<' : '>', e.number)
-      .orderBy('e.number', dir === 'previous' ? 'desc' : 'asc')
-      .limit(1)
-      .executeTakeFirst();
-  const [chapters, systems, previous, next, opened, closed, partSystems, figureKeys, pictures] = await Promise.all([
-    db.selectFrom('chapters').selectAll().where('episode_id', '=', episodeId).orderBy('position').execute(),
-    db
-      .selectFrom('build_systems')
-      .select(['key', 'name', 'safety_critical'])
-      .where('build_id', '=', e.build_id)
-      .orderBy('position')
-      .execute(),
-    neighbour('previous'),
-    neighbour('next'),
-    db
-      .selectFrom('open_items as o')
-      .leftJoin('episodes as ce', 'ce.id', 'o.closed_in_episode_id')
-      .select([
-        'o.id',
-        'o.title',
-        'o.note',
-        'ce.status as closed_status',
-        'ce.published_at as closed_at',
-        'ce.deleted_at as closed_deleted',
-      ])
-      .where('o.opened_in_episode_id', '=', episodeId)
-      .orderBy('o.id')
-      .execute(),
-    db
-      .selectFrom('open_items as o')
-      .innerJoin('episodes as e', 'e.id', 'o.opened_in_episode_id')
-      .select(['o.id', 'o.title', 'e.id as episode_id', 'e.number', 'e.slug', 'e.title as episode_title'])
-      .where('o.closed_in_episode_id', '=', episodeId)
-      .where(isPublishedEpisode)
-      .orderBy('o.id')
-      .execute(),
-    db
-      .selectFrom('part_lines')
-      .select('system_key')
-      .distinct()
-      .where('episode_id', '=', episodeId)
-      .where('system_key', 'is not', null)
-      .execute(),
-    figureSystemKeys(db, episodeId),
-    episodePictureRows(db, episodeId),
-  ]);
-  const systemList = systems.map((s) => ({ key: s.key, name: s.name, safetyCritical: s.safety_critical }));
+  const { chapters } = e;
+  const systemList = e.systems.map((s) => ({ key: s.key, name: s.name, safetyCritical: s.safety_critical }));
   const byKey = new Map(systemList.map((s) => [s.key, s]));
   const caution = needsCaution(
     {
       raisedVehicle: e.raised_vehicle,
-      systemKeys: [...[...chapters, ...partSystems].flatMap((c) => (c.system_key ? [c.system_key] : [])), ...figureKeys],
+      systemKeys: [...chapters.flatMap((c) => (c.system_key ? [c.system_key] : [])), ...e.other_system_keys],
     },
     systemList,
   );
-  const now = Date.now();
   return {
     id: e.id,
     number: e.number,
@@ -252,8 +172,8 @@ export async function getEpisodeReading(db: Db, episodeId: number): Promise<Epis
     durationSeconds: e.duration_seconds,
     hoursWorked: hours(e.minutes_worked),
     writeUpHtml: e.write_up_html,
-    cover: presentImage(pictures.cover),
-    gallery: pictures.gallery.flatMap((m) => presentImage(m) ?? []),
+    cover: presentImage(e.cover),
+    gallery: e.gallery.flatMap((m) => presentImage(m) ?? []),
     chapters: chapters.map((c, i) => ({
       id: c.id,
       startSeconds: c.start_seconds,
@@ -276,16 +196,11 @@ export async function getEpisodeReading(db: Db, episodeId: number): Promise<Epis
       vehicleYear: e.vehicle_year,
       owner: { handle: e.handle, displayName: e.display_name },
     },
-    previous: previous ?? null,
-    next: next ?? null,
+    previous: e.previous ?? null,
+    next: e.next ?? null,
     openItems: {
-      opened: opened.map((o) => ({
-        id: o.id,
-        title: o.title,
-        note: o.note,
-        closed: o.closed_status === 'published' && o.closed_deleted === null && o.closed_at !== null && o.closed_at.getTime() <= now,
-      })),
-      closed: closed.map((o) => ({
+      opened: e.opened.map((o) => ({ id: o.id, title: o.title, note: o.note, closed: o.closed })),
+      closed: e.closed.map((o) => ({
         id: o.id,
         title: o.title,
         openedIn: { id: o.episode_id, number: o.number, slug: o.slug, title: o.episode_title },

@@ -12,14 +12,41 @@ export async function listSuppliers(db: Db, q: string, buildId?: number) {
     : sql<boolean>`false`;
   const rows = await db
     .selectFrom('suppliers as s')
-    .select(['s.id', 's.name', 's.website', used.as('used_in_build')])
+    .leftJoin('sponsor_suppliers as ss', 'ss.supplier_id', 's.id')
+    .leftJoin('sponsors as sp', 'sp.id', 'ss.sponsor_id')
+    .select([
+      's.id',
+      's.name',
+      's.website',
+      used.as('used_in_build'),
+      'sp.id as sponsor_id',
+      'sp.slug as sponsor_slug',
+      'sp.name as sponsor_name',
+    ])
     .where('s.merged_into_id', 'is', null)
     .where(sql<boolean>`s.name ilike ${pattern}`)
     .orderBy(sql`used_in_build`, 'desc')
     .orderBy(sql`lower(s.name)`)
     .limit(20)
     .execute();
-  return rows.map((r) => ({ id: r.id, name: r.name, website: r.website, usedInBuild: r.used_in_build }));
+  return rows.map((r) => ({
+    id: r.id,
+    name: r.name,
+    website: r.website,
+    usedInBuild: r.used_in_build,
+    sponsor: r.sponsor_id !== null ? { id: r.sponsor_id, slug: r.sponsor_slug ?? '', name: r.sponsor_name ?? '' } : null,
+  }));
+}
+
+/** The sponsor organisation standing behind a supplier (sponsor_suppliers), if any. */
+async function backingSponsor(db: Db, supplierId: number) {
+  const r = await db
+    .selectFrom('sponsor_suppliers as ss')
+    .innerJoin('sponsors as sp', 'sp.id', 'ss.sponsor_id')
+    .select(['sp.id', 'sp.slug', 'sp.name'])
+    .where('ss.supplier_id', '=', supplierId)
+    .executeTakeFirst();
+  return r ?? null;
 }
 
 /** Creates a supplier, or returns the live one with the same name (case and spacing ignored). */
@@ -31,7 +58,7 @@ export async function createSupplier(db: Db, userId: number, input: z.infer<type
     .where(sql`lower(btrim(name))`, '=', name.toLowerCase())
     .where('merged_into_id', 'is', null)
     .executeTakeFirst();
-  if (existing) return { supplier: { ...existing, usedInBuild: false }, created: false };
+  if (existing) return { supplier: { ...existing, usedInBuild: false, sponsor: await backingSponsor(db, existing.id) }, created: false };
   const row = await db
     .insertInto('suppliers')
     .values({ name, website: input.website, created_by: userId })
@@ -44,7 +71,7 @@ export async function createSupplier(db: Db, userId: number, input: z.infer<type
     .returning(['id', 'name', 'website'])
     .executeTakeFirst();
   if (!row) return createSupplier(db, userId, input);
-  return { supplier: { ...row, usedInBuild: false }, created: true };
+  return { supplier: { ...row, usedInBuild: false, sponsor: null }, created: true };
 }
 
 /** Moves every line of `fromId` to `intoId` and leaves `fromId` pointing at it. */

@@ -66,7 +66,7 @@ export async function getWorkbench(db: Db, userId: number): Promise<Workbench> {
     db
       .selectFrom('episodes as e')
       .innerJoin('builds as b', 'b.id', 'e.build_id')
-      .select(['e.id', 'e.title', 'e.deleted_at'])
+      .select(['e.id', 'e.title', 'e.deleted_at', 'b.title as build_title'])
       .where('b.owner_id', '=', userId)
       .where('b.deleted_at', 'is', null)
       .where('e.deleted_at', '>', sql<Date>`now() - make_interval(days => ${TRASH_DAYS})`)
@@ -148,6 +148,7 @@ export async function getWorkbench(db: Db, userId: number): Promise<Workbench> {
         kind: 'build' as const,
         id: b.id,
         title: b.title,
+        buildTitle: null,
         deletedAt: b.deleted_at!.toISOString(),
         purgeAfter: purgeAfter(b.deleted_at!),
       })),
@@ -155,6 +156,7 @@ export async function getWorkbench(db: Db, userId: number): Promise<Workbench> {
         kind: 'episode' as const,
         id: e.id,
         title: e.title,
+        buildTitle: e.build_title,
         deletedAt: e.deleted_at!.toISOString(),
         purgeAfter: purgeAfter(e.deleted_at!),
       })),

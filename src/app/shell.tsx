@@ -106,6 +106,12 @@ function FlashNotice() {
     const state: unknown = location.state;
     const text = state && typeof state === 'object' && 'notice' in state && typeof state.notice === 'string' ? state.notice : null;
     setNotice(text);
+    // Shown once: drop it from the history entry so a reload (or coming back) does not repeat it.
+    // React Router keeps its own state under `usr`; the router's in-memory location is left alone.
+    if (text && typeof window !== 'undefined') {
+      const entry: unknown = window.history.state;
+      if (entry && typeof entry === 'object') window.history.replaceState({ ...entry, usr: null }, '');
+    }
   }, [location.key, location.state]);
   if (!notice) return null;
   return (

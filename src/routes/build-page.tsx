@@ -1,3 +1,4 @@
+import { SponsorCredits } from '../features/sponsors/components/sponsor-credits';
 import { Link, useLoaderData } from 'react-router';
 import { QueryState } from '../components/ui/query-state';
 import { DateText } from '../components/ui/date-text';
@@ -126,6 +127,8 @@ function Build({ build }: { build: BuildOverview }) {
         <a href={paths.feeds.build(build.id)}>Follow new episodes with a feed reader (Atom)</a>
       </p>
 
+      <SponsorCredits sponsors={build.sponsors} />
+
       <section aria-labelledby="episodes-heading" className="mt-10">
         <h2 id="episodes-heading" className="label-condensed border-b-2 border-ink pb-2">
           Episodes in order
@@ -175,7 +178,10 @@ function Build({ build }: { build: BuildOverview }) {
               <li key={o.id} className="border-[1.5px] border-dashed border-brass bg-card px-3 py-2 text-[15px]">
                 {o.title}
                 <small className="block text-[13px] text-slate">
-                  opened in <Link to={paths.episode(build.owner.handle, build.slug, o.openedIn.slug)}>episode {o.openedIn.number}</Link>
+                  opened in{' '}
+                  <Link className="underline" to={paths.episode(build.owner.handle, build.slug, o.openedIn.slug)}>
+                    episode {o.openedIn.number}
+                  </Link>
                   {o.note ? ` · ${o.note}` : ''}
                 </small>
               </li>

@@ -1,7 +1,8 @@
 import { Form, useSearchParams } from 'react-router';
-import { Button, ButtonLink, buttonClass } from '../components/ui/button';
+import { ButtonLink, buttonClass } from '../components/ui/button';
 import { PageMeta } from '../components/ui/page-meta';
 import { Pagination } from '../components/ui/pagination';
+import { QueryState } from '../components/ui/query-state';
 import { StateMessage } from '../components/ui/state-message';
 import { buildDirectoryOptions, useBuildDirectory } from '../features/reading/api/get-build-directory';
 import { BuildCard } from '../features/reading/components/build-card';
@@ -56,18 +57,14 @@ export function BuildsDirectoryPage() {
         </h2>
         {data ? (
           <Results data={data} q={q} filtered={filtered} />
-        ) : error ? (
-          <StateMessage
-            kind="error"
-            title="The builds could not be loaded."
-            action={
-              <Button onClick={() => void refetch()} disabled={isFetching}>
-                Try again
-              </Button>
-            }
-          />
         ) : (
-          <StateMessage kind="loading" title="Loading builds…" />
+          <QueryState
+            error={error}
+            isFetching={isFetching}
+            refetch={refetch}
+            errorTitle="The builds could not be loaded."
+            loadingTitle="Loading builds…"
+          />
         )}
       </section>
     </>

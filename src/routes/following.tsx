@@ -1,6 +1,5 @@
-import { Button } from '../components/ui/button';
 import { PageHeading } from '../components/ui/page-heading';
-import { StateMessage } from '../components/ui/state-message';
+import { QueryState } from '../components/ui/query-state';
 import { followingOptions, useFollowing } from '../features/following/api/queries';
 import { FollowingList } from '../features/following/components/following-list';
 import { requireAccount, rethrowAsRouteError, type LoaderDeps } from './route-guards';
@@ -23,18 +22,14 @@ export function FollowingPage() {
       <PageHeading label="Your reading" title="Following" />
       {data ? (
         <FollowingList data={data} />
-      ) : error ? (
-        <StateMessage
-          kind="error"
-          title="This list could not be loaded."
-          action={
-            <Button onClick={() => void refetch()} disabled={isFetching}>
-              Try again
-            </Button>
-          }
-        />
       ) : (
-        <StateMessage kind="loading" title="Loading…" />
+        <QueryState
+          error={error}
+          isFetching={isFetching}
+          refetch={refetch}
+          errorTitle="This list could not be loaded."
+          loadingTitle="Loading…"
+        />
       )}
     </>
   );

@@ -1,6 +1,7 @@
 import { Form, useSearchParams } from 'react-router';
 import { Button } from '../components/ui/button';
 import { PageHeading } from '../components/ui/page-heading';
+import { QueryState } from '../components/ui/query-state';
 import { StateMessage } from '../components/ui/state-message';
 import { useSession } from '../features/accounts/api/get-session';
 import { inboxOptions, useInbox } from '../features/posts/api/get-inbox';
@@ -82,19 +83,13 @@ export function InboxPage() {
         </Form>
       ) : null}
       {!data ? (
-        error ? (
-          <StateMessage
-            kind="error"
-            title="The inbox could not be loaded."
-            action={
-              <Button onClick={() => void refetch()} disabled={isFetching}>
-                Try again
-              </Button>
-            }
-          />
-        ) : (
-          <StateMessage kind="loading" title="Loading the inbox…" />
-        )
+        <QueryState
+          error={error}
+          isFetching={isFetching}
+          refetch={refetch}
+          errorTitle="The inbox could not be loaded."
+          loadingTitle="Loading the inbox…"
+        />
       ) : !data.builds.length ? (
         <StateMessage kind="empty" title="You are on no build team yet.">
           <p>Posts on the builds you run or edit arrive here.</p>

@@ -1,6 +1,5 @@
-import { Button } from '../components/ui/button';
 import { PageHeading } from '../components/ui/page-heading';
-import { StateMessage } from '../components/ui/state-message';
+import { QueryState } from '../components/ui/query-state';
 import { moderationQueueOptions, useModerationQueue } from '../features/posts/api/get-moderation-queue';
 import { ModerationList } from '../features/posts/components/moderation-list';
 import { requireAccount, rethrowAsRouteError, routeError, type LoaderDeps } from './route-guards';
@@ -26,18 +25,14 @@ export function ModerationQueuePage() {
       </PageHeading>
       {data ? (
         <ModerationList queue={data} />
-      ) : error ? (
-        <StateMessage
-          kind="error"
-          title="The queue could not be loaded."
-          action={
-            <Button onClick={() => void refetch()} disabled={isFetching}>
-              Try again
-            </Button>
-          }
-        />
       ) : (
-        <StateMessage kind="loading" title="Loading the queue…" />
+        <QueryState
+          error={error}
+          isFetching={isFetching}
+          refetch={refetch}
+          errorTitle="The queue could not be loaded."
+          loadingTitle="Loading the queue…"
+        />
       )}
     </>
   );

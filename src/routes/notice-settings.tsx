@@ -1,6 +1,5 @@
-import { Button } from '../components/ui/button';
 import { PageHeading } from '../components/ui/page-heading';
-import { StateMessage } from '../components/ui/state-message';
+import { QueryState } from '../components/ui/query-state';
 import { useSession } from '../features/accounts/api/get-session';
 import { noticePreferencesOptions, useNoticePreferences } from '../features/following/api/queries';
 import { NoticePreferencesForm } from '../features/following/components/notice-preferences-form';
@@ -27,18 +26,14 @@ export function NoticeSettingsPage() {
       </PageHeading>
       {data ? (
         <NoticePreferencesForm initial={data} onTeam={(session?.account?.builds.length ?? 0) > 0} />
-      ) : error ? (
-        <StateMessage
-          kind="error"
-          title="Your settings could not be loaded."
-          action={
-            <Button onClick={() => void refetch()} disabled={isFetching}>
-              Try again
-            </Button>
-          }
-        />
       ) : (
-        <StateMessage kind="loading" title="Loading…" />
+        <QueryState
+          error={error}
+          isFetching={isFetching}
+          refetch={refetch}
+          errorTitle="Your settings could not be loaded."
+          loadingTitle="Loading…"
+        />
       )}
     </>
   );

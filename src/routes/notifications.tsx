@@ -1,7 +1,6 @@
 import { Link } from 'react-router';
-import { Button } from '../components/ui/button';
 import { PageHeading } from '../components/ui/page-heading';
-import { StateMessage } from '../components/ui/state-message';
+import { QueryState } from '../components/ui/query-state';
 import { notificationsOptions, useNotifications } from '../features/following/api/queries';
 import { NotificationsList } from '../features/following/components/notifications-list';
 import { requireAccount, rethrowAsRouteError, type LoaderDeps } from './route-guards';
@@ -29,18 +28,14 @@ export function NotificationsPage() {
       </PageHeading>
       {data ? (
         <NotificationsList data={data} />
-      ) : error ? (
-        <StateMessage
-          kind="error"
-          title="Notifications could not be loaded."
-          action={
-            <Button onClick={() => void refetch()} disabled={isFetching}>
-              Try again
-            </Button>
-          }
-        />
       ) : (
-        <StateMessage kind="loading" title="Loading…" />
+        <QueryState
+          error={error}
+          isFetching={isFetching}
+          refetch={refetch}
+          errorTitle="Notifications could not be loaded."
+          loadingTitle="Loading…"
+        />
       )}
     </>
   );

@@ -1,8 +1,9 @@
 import { Form, Link, useSearchParams } from 'react-router';
-import { Button, buttonClass } from '../components/ui/button';
+import { buttonClass } from '../components/ui/button';
 import { DateText } from '../components/ui/date-text';
 import { PageMeta } from '../components/ui/page-meta';
 import { Pagination } from '../components/ui/pagination';
+import { QueryState } from '../components/ui/query-state';
 import { StateMessage } from '../components/ui/state-message';
 import { searchOptions, useSearch } from '../features/reading/api/search';
 import { Snippet } from '../features/reading/components/snippet';
@@ -91,18 +92,14 @@ export function SearchPage() {
               <p>Try fewer or other words; quotes look for an exact phrase, and a minus sign leaves a word out.</p>
             </StateMessage>
           )
-        ) : error ? (
-          <StateMessage
-            kind="error"
-            title="The search could not be run."
-            action={
-              <Button onClick={() => void refetch()} disabled={isFetching}>
-                Try again
-              </Button>
-            }
-          />
         ) : (
-          <StateMessage kind="loading" title="Searching…" />
+          <QueryState
+            error={error}
+            isFetching={isFetching}
+            refetch={refetch}
+            errorTitle="The search could not be run."
+            loadingTitle="Searching…"
+          />
         )}
       </section>
     </>

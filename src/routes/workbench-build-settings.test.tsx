@@ -20,6 +20,7 @@ const afterDelete: Workbench = {
       kind: 'build',
       id: 7,
       title: 'Kestrel hatchback, rust and all',
+      buildTitle: null,
       deletedAt: '2026-12-01T10:00:00.000Z',
       purgeAfter: '2026-12-31T10:00:00.000Z',
     },

@@ -14,6 +14,7 @@ import { buildValues, changedFields } from '../features/builds/lib/build-form';
 import { BuildCoverControl } from '../features/media/components/build-cover-control';
 import { BuildSponsorSummaries } from '../features/sponsors/components/build-sponsor-summaries';
 import { workbenchPaths } from '../features/workbench/paths';
+import { SponsorshipsSection } from '../features/sponsors/components/sponsorships-section';
 import { DEFAULT_SYSTEMS, type Build } from '../shared/schemas/builds';
 import type { LoaderDeps } from './route-guards';
 import { BuildCrumbs, loadTeamBuild, TeamBuild, useBuildIdParam } from './workbench-build-frame';
@@ -94,6 +95,8 @@ function OwnerSettings({ build }: { build: Build }) {
       </section>
 
       <BuildCoverControl buildId={build.id} />
+
+      <SponsorshipsSection buildId={build.id} />
 
       <section aria-labelledby="transfer-heading" className="max-w-2xl">
         <h2 id="transfer-heading" className="label-condensed mb-4 border-b-2 border-ink pb-2">

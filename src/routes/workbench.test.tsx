@@ -72,7 +72,7 @@ const fullWorkbench: Workbench = {
     },
   ],
   deleted: [
-    { kind: 'episode', id: 39, title: 'A false start', deletedAt: '2026-11-25T10:00:00.000Z', purgeAfter: '2026-12-25T10:00:00.000Z' },
+    { kind: 'episode', id: 39, title: 'A false start', buildTitle: 'Pellham 125 two-stroke', deletedAt: '2026-11-25T10:00:00.000Z', purgeAfter: '2026-12-25T10:00:00.000Z' },
   ],
   pendingTransfers: [{ buildId: 9, buildTitle: 'Furrow 35 tractor', fromDisplayName: 'Ida Ironside' }],
   onOrder: [
@@ -133,6 +133,7 @@ describe('Workbench', () => {
 
     const deleted = screen.getByRole('region', { name: 'Recently deleted' });
     expect(within(deleted).getByText('A false start')).toBeTruthy();
+    expect(within(deleted).getByText('in Pellham 125 two-stroke')).toBeTruthy();
     expect(within(deleted).getByRole('button', { name: 'Undo deleting the episode A false start' })).toBeTruthy();
 
     const offered = screen.getByRole('region', { name: 'Builds offered to you' });

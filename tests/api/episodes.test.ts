@@ -271,6 +271,7 @@ describe('trash', () => {
     expect((await editor.get(`/api/episodes/${ep.id}`)).status).toBe(404);
     const bench = await owner.get('/api/workbench');
     expect(bench.body.deleted.map((d: { id: number }) => d.id)).toContain(ep.id);
+    expect(bench.body.deleted.find((d: { id: number }) => d.id === ep.id)).toMatchObject({ kind: 'episode', buildTitle: 'Trash' });
     expect((await owner.post(`/api/episodes/${ep.id}/restore`, {})).status).toBe(200);
     expect((await editor.get(`/api/episodes/${ep.id}`)).status).toBe(200);
 

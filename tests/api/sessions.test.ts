@@ -116,7 +116,7 @@ describe('CSRF', () => {
 
 describe('sessions across restarts and processes', () => {
   it('keep working after the in-process app restarts on the same database, and on a second server process', async () => {
-    const first = await startTestApp({ keepDatabase: true });
+    const first = await startTestApp({ keepDatabase: true, inProcessOnly: true });
     let second: TestApp | undefined;
     try {
       const user = await createUser(first.deps.db, { email: 'durable@example.test' });
@@ -125,7 +125,7 @@ describe('sessions across restarts and processes', () => {
       expect(cookie).toBeDefined();
       await first.stop();
 
-      second = await startTestApp({ databaseUrl: first.database.url });
+      second = await startTestApp({ databaseUrl: first.database.url, inProcessOnly: true });
       const again = withCookie(second.baseUrl, cookie);
       const res = await again.get('/api/session');
       expect(res.status).toBe(200);

@@ -121,6 +121,36 @@ describe('signing in', () => {
     expect(own.consoleErrors).toEqual([]);
     await own.close();
   });
+
+  it('accepts an editor invitation from the e-mailed link, with a notice that does not come back on reload', async () => {
+    const { createOwnedBuild, linkFromMail, signedInClient } = await import('../helpers/accounts');
+    const { owner, build } = await createOwnedBuild(app.deps.db, {
+      owner: { handle: 'inviting-owner', email: 'inviting-owner@example.test' },
+      build: { title: '1959 Tarrow Kestrel roadster' },
+    });
+    const invitee = await createUser(app.deps.db, { handle: 'new-editor', display_name: 'New Editor', email: 'new-editor@example.test' });
+    const ownerClient = await signedInClient(app, owner.email!);
+    expect((await ownerClient.post(`/api/builds/${build.id}/invitations`, { email: invitee.email })).status).toBe(201);
+    await app.runJobs();
+    const link = linkFromMail(app.smtp, invitee.email!, '/invitations/accept');
+
+    const context = await browser.newContext();
+    await context.addCookies(await signedInCookies(invitee.email!));
+    const page = await context.newPage();
+    const guest: TrackedPage = { page, context, consoleErrors: [], requests: [], responses: [], close: () => context.close() };
+    page.on('console', (m) => void (m.type() === 'error' && guest.consoleErrors.push(m.text())));
+    await visit(guest, `${link.url}#token=${link.token}`);
+    await page.getByRole('button', { name: 'Accept' }).click();
+    const notice = page.getByText('You joined the build team of 1959 Tarrow Kestrel roadster.');
+    await notice.waitFor();
+    await page.waitForURL(`**/account/builds/${build.id}/team`);
+    await page.reload();
+    await waitHydrated(page);
+    await page.getByRole('heading', { level: 1, name: /Tarrow Kestrel/ }).waitFor();
+    expect(await notice.count()).toBe(0);
+    expect(guest.consoleErrors).toEqual([]);
+    await guest.close();
+  });
 });
 
 /** A session cookie for the account with this address, made through a real sign-in link. */

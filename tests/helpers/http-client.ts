@@ -46,6 +46,17 @@ export class TestClient {
     return { status: res.status, body: parsed as T, headers: res.headers };
   }
 
+  /** Sends a body exactly as given (as application/json), with the session and CSRF token; the answer as text. */
+  async rawRequest(method: string, path: string, raw?: string): Promise<{ status: number; text: string; contentType: string }> {
+    const headers: Record<string, string> = { accept: 'application/json' };
+    if (raw !== undefined) headers['content-type'] = 'application/json';
+    if (method !== 'GET') headers[CSRF_HEADER] = await this.csrfToken();
+    if (this.cookie) headers.cookie = this.cookie;
+    const res = await fetch(`${this.baseUrl}${path}`, { method, headers, body: raw, redirect: 'manual' });
+    this.keepCookie(res);
+    return { status: res.status, text: await res.text(), contentType: res.headers.get('content-type') ?? '' };
+  }
+
   // eslint-disable-next-line @typescript-eslint/no-explicit-any -- response bodies are read loosely in tests
   get<T = any>(path: string) {
     return this.request<T>('GET', path);

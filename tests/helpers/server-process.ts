@@ -28,7 +28,10 @@ export interface ServerProcess {
  * Spawns a second server process (`node --import tsx server/index.ts`) over the test app's
  * database, S3 and SMTP fakes, and waits until /api/health answers.
  */
-export async function spawnServerProcess(app: TestApp, opts: { timeoutMs?: number } = {}): Promise<ServerProcess> {
+export async function spawnServerProcess(
+  app: Pick<TestApp, 'database' | 's3' | 'smtp'>,
+  opts: { timeoutMs?: number; env?: Record<string, string>; publicUrl?: string } = {},
+): Promise<ServerProcess> {
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
   const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
@@ -40,7 +43,7 @@ export async function spawnServerProcess(app: TestApp, opts: { timeoutMs?: numbe
       LOG_LEVEL: 'silent',
       HOST: '127.0.0.1',
       PORT: String(port),
-      PUBLIC_URL: baseUrl,
+      PUBLIC_URL: opts.publicUrl ?? baseUrl,
       DATABASE_URL: app.database.url,
       DATABASE_POOL_MAX: '3',
       SESSION_SECRET: TEST_SESSION_SECRET,
@@ -49,6 +52,7 @@ export async function spawnServerProcess(app: TestApp, opts: { timeoutMs?: numbe
       SMTP_HOST: '127.0.0.1',
       SMTP_PORT: String(app.smtp.smtpPort),
       AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true',
+      ...opts.env,
     },
     stdio: ['ignore', 'ignore', 'pipe'],
   });

@@ -9,7 +9,16 @@ import { startSmtpFake, type SmtpFake } from '../../fakes/smtp';
 import { createApp } from '../../server/app';
 import { loadConfig, type Config } from '../../server/config';
 import { createDeps, type RunningDeps } from '../../server/deps';
+import { startRoundRobin, type RoundRobin } from './round-robin';
+import { spawnServerProcess, type ServerProcess } from './server-process';
 import { createTestDatabase, existingTestDatabase, type TestDatabase } from './test-db';
+
+/**
+ * `RR_TWO_PROCESSES=1` (the `two-processes` Vitest project): `baseUrl` is a round-robin front over
+ * two spawned server processes on the same database and fakes, so consecutive requests of a test
+ * alternate between them. The in-process app still exists for `deps` and `runJobs()`.
+ */
+export const TWO_PROCESSES = process.env.RR_TWO_PROCESSES === '1';
 
 export const TEST_BUCKET = 'rivet-reel-test';
 export const TEST_SESSION_SECRET = 'test-session-secret-0123456789-abcdefghij';
@@ -34,6 +43,8 @@ export interface TestAppOptions {
   databaseUrl?: string;
   /** Leave the database in place on stop(), so another app or process can use it afterwards. */
   keepDatabase?: boolean;
+  /** Serve from this process only, even in two-process mode (for tests that spawn their own). */
+  inProcessOnly?: boolean;
 }
 
 /** Starts the whole app in-process over a fresh database and fresh S3/SMTP fakes. */
@@ -47,9 +58,10 @@ export async function startTestApp(opts: TestAppOptions = {}): Promise<TestApp> 
   server.listen(0, '127.0.0.1');
   await new Promise<void>((resolve) => server.once('listening', resolve));
   const { port } = server.address() as AddressInfo;
+  const front: RoundRobin | null = TWO_PROCESSES && !opts.inProcessOnly ? await startRoundRobin() : null;
   const config = loadConfig({
     NODE_ENV: 'test',
-    PUBLIC_URL: `http://127.0.0.1:${port}`,
+    PUBLIC_URL: front?.url ?? `http://127.0.0.1:${port}`,
     SESSION_SECRET: TEST_SESSION_SECRET,
     LOG_LEVEL: 'silent',
     DATABASE_URL: database.url,
@@ -66,8 +78,15 @@ export async function startTestApp(opts: TestAppOptions = {}): Promise<TestApp> 
   await deps.queue.start({ workers: false });
   server.on('request', createApp(deps));
 
+  let processes: ServerProcess[] = [];
+  if (front) {
+    const env = { RATE_LIMIT_MULTIPLIER: config.RATE_LIMIT_MULTIPLIER.toString(), DIST_DIR: config.DIST_DIR, ...opts.env };
+    processes = await Promise.all([0, 1].map(() => spawnServerProcess({ database, s3, smtp }, { env, publicUrl: front.url })));
+    front.setTargets(processes.map((p) => p.baseUrl));
+  }
+
   return {
-    baseUrl: `http://127.0.0.1:${port}`,
+    baseUrl: front?.url ?? `http://127.0.0.1:${port}`,
     deps,
     config,
     database,
@@ -84,6 +103,13 @@ export async function startTestApp(opts: TestAppOptions = {}): Promise<TestApp> 
       return total;
     },
     async stop() {
+      if (front) {
+        const codes = await Promise.all(processes.map((p) => p.terminate()));
+        console.log(
+          `[two-processes] requests alternated between two server processes: ${front.counts.join(' and ')}; they exited with ${codes.join(', ')}`,
+        );
+        await front.stop();
+      }
       server.closeAllConnections();
       await new Promise<void>((resolve) => server.close(() => resolve()));
       await deps.close();

@@ -161,6 +161,8 @@ export const workbench = z.object({
       kind: z.enum(['build', 'episode']),
       id: z.number().int(),
       title: z.string(),
+      /** For an episode: the build it belongs to, so two "Episode 3"s can be told apart. */
+      buildTitle: z.string().nullable(),
       deletedAt: z.string(),
       purgeAfter: z.string(),
     }),

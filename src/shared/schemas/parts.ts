@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { currencyExponent, parseScaled, QUANTITY_SCALE, RATE_SCALE } from '../money';
 import { pagedList, pageQuery } from './common';
+import { SUPPORT_KINDS } from './sponsors';
 
 // The parts list of DESIGN.md ("Part line", "Ledger", "Money words"): the API contract.
 
@@ -74,6 +75,11 @@ const partLineFields = {
   openItemId: z.number().int().positive().nullable(),
   /** A receipt (image or PDF) uploaded to the build's media as kind "receipt". */
   receiptMediaId: z.number().int().positive().nullable(),
+  /** Support on the line (DESIGN.md "support"): its kind and the sponsor organisation that gave it. */
+  supportKind: z.enum(SUPPORT_KINDS).nullable(),
+  sponsorId: z.number().int().positive().nullable(),
+  /** The unit price without support, in the line's currency (value given = quantity × (list − paid)). */
+  listPriceMinor: minor.nullable(),
 };
 
 /** A new line: what the creator typed, with the usual defaults for what they left out. */
@@ -95,6 +101,9 @@ export const partLineInput = z.object({
   affiliate: partLineFields.affiliate.default(false),
   openItemId: partLineFields.openItemId.default(null),
   receiptMediaId: partLineFields.receiptMediaId.default(null),
+  supportKind: partLineFields.supportKind.default(null),
+  sponsorId: partLineFields.sponsorId.default(null),
+  listPriceMinor: partLineFields.listPriceMinor.default(null),
 });
 export type PartLineInput = z.infer<typeof partLineInput>;
 export type PartLineInputRaw = z.input<typeof partLineInput>;
@@ -109,6 +118,29 @@ export function partLineProblems(line: PartLineInput, buildCurrency: string): Re
   if (line.openItemId !== null && line.status !== 'needed' && line.status !== 'on-order')
     problems.openItemId = 'only for lines still needed or on order';
   if (line.affiliate && !line.buyUrl) problems.affiliate = 'needs the where-to-buy link';
+  Object.assign(problems, supportProblems(line));
+  return problems;
+}
+
+/**
+ * Support rules (common practice for gifted and discounted goods; DESIGN.md "Money words"): a sale
+ * carries no support; a list price belongs to a supported line and is never below the price paid;
+ * a discounted line's list price is above it; a gifted line was paid nothing. Sponsor and kind may
+ * be filled in one at a time on a draft — the publish check asks for both.
+ */
+export function supportProblems(
+  line: Pick<PartLineInput, 'kind' | 'supportKind' | 'sponsorId' | 'listPriceMinor' | 'unitPriceMinor'>,
+): Record<string, string> {
+  const problems: Record<string, string> = {};
+  const supported = line.supportKind !== null || line.sponsorId !== null;
+  if (line.kind === 'sale' && supported) problems.supportKind = 'a sale line carries no support';
+  if (line.listPriceMinor !== null && !supported) problems.listPriceMinor = 'only for a supported line';
+  else if (line.listPriceMinor !== null && line.listPriceMinor < line.unitPriceMinor)
+    problems.listPriceMinor = 'the list price cannot be below the price paid';
+  else if (line.supportKind === 'discounted' && line.listPriceMinor !== null && line.listPriceMinor === line.unitPriceMinor)
+    problems.listPriceMinor = 'a discounted line’s list price is above the price paid';
+  if (line.supportKind === 'gifted' && line.unitPriceMinor > 0)
+    problems.unitPriceMinor = 'a gifted part was paid nothing: set the price to 0';
   return problems;
 }
 
@@ -146,6 +178,13 @@ export const partLine = z.object({
   openItem: z.object({ id: z.number().int(), title: z.string() }).nullable(),
   /** The receipt's id and type; the file is the build team's alone (GET /api/media/:id/download). */
   receipt: z.object({ id: z.number().int(), contentType: z.string() }).nullable(),
+  supportKind: z.enum(SUPPORT_KINDS).nullable(),
+  sponsor: z.object({ id: z.number().int(), slug: z.string(), name: z.string() }).nullable(),
+  listPriceMinor: z.number().int().nullable(),
+  /** round(quantity × list) − round(quantity × paid), in the line's currency; 0 without support. */
+  valueGivenMinor: z.number().int(),
+  /** The sponsor that stands behind the line's supplier, offered to the creator (never set by itself). */
+  suggestedSponsor: z.object({ id: z.number().int(), slug: z.string(), name: z.string() }).nullable(),
   /** In the line's own currency, computed by PostgreSQL. */
   amounts,
   /** In the build's currency; null when the line's currency differs and no rate is recorded. */
@@ -237,7 +276,14 @@ export type LedgerQuery = z.infer<typeof ledgerQuery>;
 export const ledgerResponse = pagedList(partLine).extend({ totals: partTotals });
 export type LedgerResponse = z.infer<typeof ledgerResponse>;
 
-export const supplier = z.object({ id: z.number().int(), name: z.string(), website: z.string().nullable(), usedInBuild: z.boolean() });
+export const supplier = z.object({
+  id: z.number().int(),
+  name: z.string(),
+  website: z.string().nullable(),
+  usedInBuild: z.boolean(),
+  /** The sponsor organisation that stands behind this supplier, if any (a suggestion for its lines). */
+  sponsor: z.object({ id: z.number().int(), slug: z.string(), name: z.string() }).nullable(),
+});
 export const supplierList = z.object({ items: z.array(supplier) });
 export const supplierCreate = z.object({
   name: z.string().trim().min(1, 'needs a name').max(120),

@@ -3,6 +3,7 @@ import { VEHICLE_KINDS, VISIBILITIES } from './builds';
 import { pagedList, pageQuery } from './common';
 import { episodeListItem } from './episodes';
 import { imageRef } from './media';
+import { sponsorRef } from './sponsors';
 
 // The public side: what readers get on the builds directory, build, episode, creator and search pages.
 
@@ -74,6 +75,8 @@ export const buildOverview = z.object({
     }),
   ),
   openItems: z.array(z.object({ id: z.number().int(), title: z.string(), note: z.string().nullable(), openedIn: episodeRef })),
+  /** Sponsors credited on the build page: its sponsorships and the sponsors of published supported lines. */
+  sponsors: z.array(sponsorRef),
 });
 export type BuildOverview = z.infer<typeof buildOverview>;
 

@@ -119,3 +119,12 @@ export const sponsorSummary = z.object({
   lines: pagedList(sponsorSummaryLine),
 });
 export type SponsorSummary = z.infer<typeof sponsorSummary>;
+
+/** Sponsor organisations for pickers (public: their names and logos credit them on pages anyway). */
+export const sponsorList = z.object({ items: z.array(sponsorRef) });
+export type SponsorList = z.infer<typeof sponsorList>;
+
+export const sponsorshipList = z.object({ items: z.array(sponsorship) });
+export type SponsorshipList = z.infer<typeof sponsorshipList>;
+
+export const SUPPORT_KIND_LABELS: Record<SupportKind, string> = { gifted: 'Gifted', discounted: 'Discounted', paid: 'Paid' };

@@ -6,5 +6,6 @@ export const partKeys = {
   episode: (episodeId: number) => [...partKeys.all, 'episode', episodeId] as const,
   buildTotals: (buildId: number, scope: 'published' | 'all') => [...partKeys.all, 'totals', buildId, scope] as const,
   ledger: (buildId: number, q: LedgerQuery) => [...partKeys.all, 'ledger', buildId, q] as const,
+  sponsors: () => [...partKeys.all, 'sponsors'] as const,
   suppliers: (q: string, buildId: number | undefined) => [...partKeys.all, 'suppliers', q, buildId ?? null] as const,
 };

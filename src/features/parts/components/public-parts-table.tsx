@@ -1,3 +1,4 @@
+import { SupportTag } from './support-tag';
 import { useState } from 'react';
 import { Plate } from '../../../components/ui/plate';
 import { formatTime } from '../../../shared/chapters';
@@ -250,6 +251,11 @@ function Row({
           {l.status === 'on-order' || l.status === 'needed' ? STATUS_LABEL[l.status] : SOURCE_LABEL[l.source]}
         </span>
         {l.kind === 'sale' ? <span className="ml-1 font-condensed text-xs tracking-[0.08em] text-gauge uppercase">· sold</span> : null}
+        {l.supportKind ? (
+          <span className="mt-1 block">
+            <SupportTag line={l} />
+          </span>
+        ) : null}
       </td>
       <td className="py-2 pr-2 text-right font-mono max-sm:hidden">
         {l.quantity}

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { decimalToMinor, formatScaled, minorToDecimal, parseScaled } from '../../../shared/money';
 import type { TotalsLine } from '../../../shared/parts-totals';
+import type { SupportKind } from '../../../shared/schemas/sponsors';
 import {
   type PART_KINDS,
   type PART_SOURCES,
@@ -40,6 +41,15 @@ export interface PartLineFormValues {
   openItemId: string;
   /** Carried through edits unchanged: a receipt is attached from its own control, not typed. */
   receiptMediaId: string;
+  /** '' for no support, or one of SUPPORT_KINDS. */
+  supportKind: '' | SupportKind;
+  /** The crediting sponsor's id as text ('' for none). */
+  sponsorId: string;
+  /** The unit list price as a decimal in the line's currency ('' for none). */
+  listPrice: string;
+  /** The sponsor behind the chosen supplier, as a suggestion only (never sent). */
+  suggestedSponsorId: string;
+  suggestedSponsorName: string;
 }
 export type PartFormField = keyof PartLineFormValues;
 
@@ -50,6 +60,7 @@ const fieldOfInputKey: Record<string, PartFormField> = {
   unitPriceMinor: 'unitPrice',
   taxRateBp: 'taxRate',
   avoidedCostMinor: 'avoidedCost',
+  listPriceMinor: 'listPrice',
 };
 export function formFieldOf(inputKey: string): PartFormField {
   return fieldOfInputKey[inputKey] ?? (inputKey as PartFormField);
@@ -78,6 +89,11 @@ export function emptyPartLineValues(currency: string, carry: Partial<PartLineFor
     affiliate: false,
     openItemId: '',
     receiptMediaId: '',
+    supportKind: '',
+    sponsorId: '',
+    listPrice: '',
+    suggestedSponsorId: '',
+    suggestedSponsorName: '',
     ...carry,
   };
 }
@@ -114,6 +130,11 @@ export function lineToValues(line: PartLine, chapterStarts: readonly number[]): 
     affiliate: line.affiliate,
     openItemId: line.openItem ? String(line.openItem.id) : '',
     receiptMediaId: line.receipt ? String(line.receipt.id) : '',
+    supportKind: line.supportKind ?? '',
+    sponsorId: line.sponsor ? String(line.sponsor.id) : '',
+    listPrice: line.listPriceMinor === null ? '' : minorToDecimal(line.listPriceMinor, line.currency),
+    suggestedSponsorId: line.suggestedSponsor ? String(line.suggestedSponsor.id) : '',
+    suggestedSponsorName: line.suggestedSponsor?.name ?? '',
   };
 }
 
@@ -140,6 +161,9 @@ export function lineToInput(line: PartLine): PartLineInput {
     affiliate: line.affiliate,
     openItemId: line.openItem?.id ?? null,
     receiptMediaId: line.receipt?.id ?? null,
+    supportKind: line.supportKind,
+    sponsorId: line.sponsor?.id ?? null,
+    listPriceMinor: line.listPriceMinor,
   };
 }
 
@@ -162,6 +186,9 @@ export function valuesToInput(v: PartLineFormValues, buildCurrency: string, keep
   if (bp === null || bp < 0n || bp > 10_000n) errors.taxRate = 'a percent from 0 to 100, e.g. 20';
   const avoided = v.avoidedCost.trim() === '' ? null : decimalToMinor(v.avoidedCost, currency);
   if (v.avoidedCost.trim() !== '' && (avoided === null || avoided < 0)) errors.avoidedCost = `an amount in ${currency}`;
+  const listPrice = v.listPrice.trim() === '' ? null : decimalToMinor(v.listPrice, currency);
+  if (v.listPrice.trim() !== '' && (listPrice === null || listPrice < 0))
+    errors.listPrice = `a price in ${currency || 'the currency'}, e.g. 14.40`;
   // Said at once with the other problems, not only once the rest parses.
   if (currency !== buildCurrency && v.fxRate.trim() === '') errors.fxRate = `needs the rate you used to ${buildCurrency}`;
   // A typed name that was never picked would be dropped without a word: ask for the choice.
@@ -187,6 +214,9 @@ export function valuesToInput(v: PartLineFormValues, buildCurrency: string, keep
     affiliate: v.affiliate,
     openItemId: v.status === 'needed' || v.status === 'on-order' ? idOrNull(v.openItemId) : null,
     receiptMediaId: idOrNull(v.receiptMediaId),
+    supportKind: v.supportKind === '' ? null : v.supportKind,
+    sponsorId: idOrNull(v.sponsorId),
+    listPriceMinor: listPrice,
   };
   const parsed = partLineInput.safeParse(raw);
   if (!parsed.success) {

@@ -20,9 +20,10 @@ function json(status: number, body: unknown): Response {
   return new Response(JSON.stringify(body), { status, headers: { 'content-type': 'application/json' } });
 }
 
+const sponsors = [{ id: 3, slug: 'quillon-works', name: 'Quillon Works', website: null, logoUrl: null }];
 const suppliers = [
-  { id: 1, name: 'Brackenford Motor Spares', website: null, usedInBuild: true },
-  { id: 2, name: 'Quillon Fasteners', website: null, usedInBuild: false },
+  { id: 1, name: 'Brackenford Motor Spares', website: null, usedInBuild: true, sponsor: null },
+  { id: 2, name: 'Quillon Fasteners', website: null, usedInBuild: false, sponsor: { id: 3, slug: 'quillon-works', name: 'Quillon Works' } },
 ];
 
 export function createFakePartsServer({ episodeId = 41, buildCurrency = 'EUR' } = {}) {
@@ -37,6 +38,9 @@ export function createFakePartsServer({ episodeId = 41, buildCurrency = 'EUR' } 
       episodeId,
       position,
       supplier: supplier ? { id: supplier.id, name: supplier.name } : null,
+      sponsor: sponsors.find((sp) => sp.id === input.sponsorId) ?? null,
+      suggestedSponsor: supplier?.sponsor ?? null,
+      valueGivenMinor: 0,
       openItem: null,
       receipt: null,
       amounts,
@@ -53,6 +57,7 @@ export function createFakePartsServer({ episodeId = 41, buildCurrency = 'EUR' } 
     state.calls.push(call);
     const { method, url, body } = call;
     if (url === '/api/csrf-token') return json(200, { token: 'csrf' });
+    if (url === '/api/sponsors') return json(200, { items: sponsors });
     if (url.startsWith('/api/suppliers')) {
       const q = new URL(url, 'http://x').searchParams.get('q')?.toLowerCase() ?? '';
       return json(200, { items: suppliers.filter((s) => s.name.toLowerCase().includes(q)) });

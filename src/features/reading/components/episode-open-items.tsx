@@ -31,7 +31,11 @@ export function EpisodeOpenItems({ episode }: { episode: EpisodeReading }) {
             <li key={o.id}>
               <span className="font-semibold text-gauge">Finished:</span> {o.title}{' '}
               <span className="text-slate">
-                (left open in <Link to={paths.episode(build.owner.handle, build.slug, o.openedIn.slug)}>episode {o.openedIn.number}</Link>)
+                (left open in{' '}
+                <Link className="underline" to={paths.episode(build.owner.handle, build.slug, o.openedIn.slug)}>
+                  episode {o.openedIn.number}
+                </Link>
+                )
               </span>
             </li>
           ))}

@@ -10,5 +10,7 @@ export const sponsorKeys = {
   summary: (slug: string, q: SponsorSummaryQuery) => [...sponsorKeys.all, 'summary', slug, q] as const,
   teamSummary: (buildId: number, sponsorId: number, q: SponsorSummaryQuery) =>
     [...sponsorKeys.all, 'team-summary', buildId, sponsorId, q] as const,
+  list: () => [...sponsorKeys.all, 'list'] as const,
+  sponsorships: (buildId: number) => [...sponsorKeys.all, 'sponsorships', buildId] as const,
   buildSponsors: (buildId: number) => [...sponsorKeys.all, 'build-sponsors', buildId] as const,
 };

@@ -17,6 +17,7 @@ export function RecentlyDeleted({ items }: { items: Workbench['deleted'] }) {
               <span className="min-w-0 flex-1 basis-56">
                 <span className="label-condensed block">{d.kind === 'build' ? 'Build' : 'Episode'}</span>
                 <span className="font-semibold">{d.title}</span>
+                {d.buildTitle ? <span className="text-slate"> in {d.buildTitle}</span> : null}
                 <span className="block text-[15px] text-slate">
                   Deleted <DateText iso={d.deletedAt} />; removed for good after <DateText iso={d.purgeAfter} />
                 </span>

@@ -9,6 +9,8 @@ import { formFieldOf, partLineFormSchema, valuesToInput, type PartLineFormValues
 import { KIND_LABELS, SOURCE_LABELS, STATUS_LABELS } from '../../lib/labels';
 import { CheckCell, SelectCell, TextCell, errorIdOf } from './part-line-fields';
 import { SupplierField } from './supplier-field';
+import { useSponsorOptions } from '../../api/get-sponsors';
+import { SUPPORT_KINDS, SUPPORT_KIND_LABELS } from '../../../../shared/schemas/sponsors';
 
 export interface PartsContext {
   buildId: number;
@@ -58,7 +60,10 @@ export function PartLineEditor({
   });
   const { register, handleSubmit, control, setValue, setError, reset, formState } = form;
   const values = useWatch({ control }) as PartLineFormValues;
-  const { currency, source, status, supplierName, supplierId } = values;
+  const { currency, source, status, supplierName, supplierId, suggestedSponsorId, suggestedSponsorName, sponsorId } = values;
+  const sponsors = useSponsorOptions().data?.items ?? [];
+  // A linked supplier only suggests its sponsor: the creator accepts it (DESIGN.md "Sponsor").
+  const suggestion = suggestedSponsorId !== '' && suggestedSponsorId !== sponsorId ? suggestedSponsorName : null;
   const foreign = currency.trim().toUpperCase() !== ctx.buildCurrency;
 
   useEffect(() => {
@@ -87,6 +92,8 @@ export function PartLineEditor({
           fxRate,
           supplierId: sid,
           supplierName: sname,
+          suggestedSponsorId: ssid,
+          suggestedSponsorName: ssname,
         } = values;
         reset({
           ...defaultValues,
@@ -99,6 +106,8 @@ export function PartLineEditor({
           fxRate,
           supplierId: sid,
           supplierName: sname,
+          suggestedSponsorId: ssid,
+          suggestedSponsorName: ssname,
         });
         focusDescription();
       }
@@ -154,6 +163,8 @@ export function PartLineEditor({
           onChange={(next) => {
             setValue('supplierId', next.supplierId, { shouldDirty: true });
             setValue('supplierName', next.supplierName, { shouldDirty: true });
+            setValue('suggestedSponsorId', next.sponsor ? String(next.sponsor.id) : '');
+            setValue('suggestedSponsorName', next.sponsor?.name ?? '');
           }}
         />
       </div>
@@ -215,6 +226,31 @@ export function PartLineEditor({
       ) : null}
       <TextCell {...common} field="buyUrl" label={label('Where to buy (link)')} inputMode="url" className="col-span-2 lg:col-span-2" />
       <CheckCell {...common} field="affiliate" label={label('Affiliate link')} />
+      <SelectCell
+        {...common}
+        field="supportKind"
+        value={String(values.supportKind)}
+        label={label('Support')}
+        options={[{ value: '', label: 'None' }, ...SUPPORT_KINDS.map((k) => ({ value: k, label: SUPPORT_KIND_LABELS[k] }))]}
+      />
+      <SelectCell
+        {...common}
+        field="sponsorId"
+        value={String(values.sponsorId)}
+        label={label('Sponsor')}
+        options={[{ value: '', label: 'None' }, ...sponsors.map((s) => ({ value: String(s.id), label: s.name }))]}
+      />
+      <TextCell {...common} field="listPrice" label={label('List price (unit)')} inputMode="decimal" mono placeholder="0.00" />
+      {suggestion ? (
+        <div className="col-span-2 flex flex-wrap items-center gap-2 border border-brass bg-brass-soft px-3 py-2 sm:col-span-4 lg:col-span-8">
+          <p className="text-[14px] text-ink">
+            {supplierName || 'This supplier'} is backed by <strong>{suggestion}</strong>. Was this line supported by them?
+          </p>
+          <Button variant="secondary" onClick={() => setValue('sponsorId', suggestedSponsorId, { shouldDirty: true })}>
+            Credit {suggestion}
+          </Button>
+        </div>
+      ) : null}
       {status === 'needed' || status === 'on-order' ? (
         <SelectCell
           {...common}

@@ -5,6 +5,7 @@ import { formatMinor } from '../../../../shared/money';
 import type { PartLine } from '../../../../shared/schemas/parts';
 import { SOURCE_LABELS, STATUS_LABELS, STATUS_TONE } from '../../lib/labels';
 import { ReceiptControl } from './receipt-control';
+import { SupportTag } from '../support-tag';
 
 const col = createColumnHelper<PartLine>();
 const th = 'py-2 pr-3 font-condensed text-[13px] font-semibold tracking-[0.1em] text-slate uppercase';
@@ -57,6 +58,10 @@ export const PartsTable = memo(function PartsTable({
             {SOURCE_LABELS[l.source]} · {STATUS_LABELS[l.status]}
           </span>
         ),
+      }),
+      col.accessor('supportKind', {
+        header: 'Support',
+        cell: ({ row: { original: l } }) => <SupportTag line={l} team />,
       }),
       col.accessor('quantity', {
         header: 'Qty',

@@ -8,7 +8,8 @@ interface SupplierFieldProps {
   name: string;
   /** The chosen supplier's id ('' for none). */
   supplierId: string;
-  onChange: (next: { supplierId: string; supplierName: string }) => void;
+  /** `sponsor` is the organisation standing behind a picked supplier (only a suggestion for the line). */
+  onChange: (next: { supplierId: string; supplierName: string; sponsor?: { id: number; name: string } | null }) => void;
   error?: string;
   errorId?: string;
 }
@@ -50,10 +51,11 @@ export function SupplierField({ buildId, label, name, supplierId, onChange, erro
   const pick = (option: Option | undefined) => {
     if (!option) return;
     setOpen(false);
-    if (option.kind === 'supplier') return onChange({ supplierId: String(option.supplier.id), supplierName: option.supplier.name });
+    if (option.kind === 'supplier')
+      return onChange({ supplierId: String(option.supplier.id), supplierName: option.supplier.name, sponsor: option.supplier.sponsor });
     create.mutate(
       { name: option.name, website: null },
-      { onSuccess: (created) => onChange({ supplierId: String(created.id), supplierName: created.name }) },
+      { onSuccess: (created) => onChange({ supplierId: String(created.id), supplierName: created.name, sponsor: created.sponsor }) },
     );
   };
 
@@ -96,7 +98,7 @@ export function SupplierField({ buildId, label, name, supplierId, onChange, erro
         className={`mt-1 ${fieldClass}`}
         onChange={(e) => {
           // Typing drops the chosen record until a name is picked again.
-          onChange({ supplierId: '', supplierName: e.target.value });
+          onChange({ supplierId: '', supplierName: e.target.value, sponsor: null });
           setOpen(true);
           setActive(0);
         }}
@@ -104,7 +106,7 @@ export function SupplierField({ buildId, label, name, supplierId, onChange, erro
         onBlur={() => {
           setOpen(false);
           const match = items.find((s) => s.name.toLowerCase() === typed);
-          if (!supplierId && match) onChange({ supplierId: String(match.id), supplierName: match.name });
+          if (!supplierId && match) onChange({ supplierId: String(match.id), supplierName: match.name, sponsor: match.sponsor });
         }}
       />
       <ul

@@ -1,0 +1,59 @@
+// An aggregate endpoint against the same SQL run directly through `pg`: the statements the endpoint
+// sent are read from the bench-mode query log, then replayed on a pool of their own, all at once
+// (the fastest the database can answer them: the strict comparison).
+import pg from 'pg';
+import { queryLog } from './load';
+
+export interface AggregateResult {
+  name: string;
+  ms: number;
+  raw_sql_ms: number;
+  ratio: number;
+  statements: number;
+  /** Each statement's plan uses an index somewhere (EXPLAIN). */
+  index_use: boolean[];
+}
+
+const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
+
+/** The median time of `runs` sequential requests to `url`, and the same SQL replayed through pg. */
+export async function timeAggregate(name: string, baseUrl: string, databaseUrl: string, path: string, runs = 15): Promise<AggregateResult> {
+  const url = `${baseUrl}${path}`;
+  const warm = await fetch(url);
+  if (!warm.ok) throw new Error(`${path} answered ${warm.status}`);
+  await warm.arrayBuffer();
+  const before = (await queryLog(baseUrl)).queries;
+  await (await fetch(url)).arrayBuffer();
+  const statements = (await queryLog(baseUrl, before)).log;
+
+  const endpoint: number[] = [];
+  for (let i = 0; i < runs; i += 1) {
+    const t0 = performance.now();
+    await (await fetch(url)).arrayBuffer();
+    endpoint.push(performance.now() - t0);
+  }
+
+  const pool = new pg.Pool({ connectionString: databaseUrl, max: Math.max(1, statements.length) });
+  try {
+    const replay = () => Promise.all(statements.map((s) => pool.query(s.text, s.values)));
+    await replay();
+    const raw: number[] = [];
+    for (let i = 0; i < runs; i += 1) {
+      const t0 = performance.now();
+      await replay();
+      raw.push(performance.now() - t0);
+    }
+    const index_use: boolean[] = [];
+    for (const s of statements) {
+      const plan = await pool.query<{ 'QUERY PLAN': string }>(`explain ${s.text}`, s.values);
+      index_use.push(plan.rows.some((r) => /Index (Only )?Scan|Bitmap Index Scan/.test(r['QUERY PLAN'])));
+    }
+    const ms = median(endpoint);
+    const rawMs = median(raw);
+    return { name, ms: round(ms), raw_sql_ms: round(rawMs), ratio: round(ms / rawMs), statements: statements.length, index_use };
+  } finally {
+    await pool.end();
+  }
+}
+
+const round = (x: number) => Math.round(x * 100) / 100;
