@@ -1,4 +1,5 @@
 import type { Response } from 'express';
+import { sql } from 'kysely';
 import { z } from 'zod';
 import { idParam, invitationCreate } from '../../src/shared/schemas/accounts';
 import { emptyBody, sponsorLogoFields } from '../../src/shared/schemas/sponsor-admin';
@@ -9,6 +10,7 @@ import { buildResource, sponsorBySlugResource } from '../auth/resources';
 import { HttpError } from '../http/http-error';
 import { parse } from '../http/parse';
 import { defineRoute } from '../http/registry';
+import { presentSponsorRef } from '../presenters/sponsors';
 import { inviteSponsorMember, resendInvitation } from '../services/invitations';
 import { sponsorSummary, sponsorSummaryCsv, type SummaryScope } from '../services/sponsor-summary';
 import {
@@ -19,6 +21,7 @@ import {
   linkSupplier,
   listSponsorsForAdmin,
   removeSponsorMember,
+  selectSponsors,
   revokeSponsorInvitation,
   setSponsorLogo,
   unlinkSupplier,
@@ -218,16 +221,19 @@ export const sponsorSummaryRoutes = [
     params: z.object({ buildId: idParam }),
     resource: buildResource,
     handler: async ({ deps, params }) => {
-      const ids = await deps.db
-        .selectFrom('part_lines')
-        .select('sponsor_id')
-        .distinct()
-        .where('build_id', '=', params.buildId)
-        .where('sponsor_id', 'is not', null)
-        .where('support_kind', 'is not', null)
+      const rows = await selectSponsors(deps.db)
+        .where('s.id', 'in', (eb) =>
+          eb
+            .selectFrom('part_lines')
+            .select('sponsor_id')
+            .where('build_id', '=', params.buildId)
+            .where('sponsor_id', 'is not', null)
+            .where('support_kind', 'is not', null),
+        )
+        .orderBy(sql`lower(s.name)`)
+        .orderBy('s.id')
         .execute();
-      const refs = await Promise.all(ids.map((r) => getSponsorRef(deps.db, r.sponsor_id!)));
-      return { items: refs.filter((r) => r !== null).sort((a, b) => a.name.localeCompare(b.name)) };
+      return { items: rows.map(presentSponsorRef) };
     },
   }),
   defineRoute({
