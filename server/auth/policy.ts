@@ -9,6 +9,8 @@ export type Resource =
   | { kind: 'build'; id: number; visibility: BuildVisibility; deleted: boolean; pendingTransferTo: number | null }
   | { kind: 'episode'; id: number; buildId: number; visibility: BuildVisibility; status: EpisodeStatus; deleted: boolean }
   | { kind: 'account'; userId: number }
+  /** A sponsor organisation as its summary sees it: only its members know it is there (404 to others). */
+  | { kind: 'sponsor'; id: number }
   | {
       kind: 'post';
       id: number;
@@ -67,6 +69,10 @@ const rules = {
   'post.answer': { signedIn: true, allow: isTeam },
   'post.moderate': { signedIn: true, allow: (a, r) => a?.isAdmin === true || isTeam(a, r) },
   'admin.moderation': { signedIn: true, allow: (a) => a?.isAdmin === true },
+  // Sponsors: admins keep the organisations; a member reads its own organisation's summary (the
+  // resource is hidden from everyone else, admins included, so they get 404).
+  'admin.sponsors': { signedIn: true, allow: (a) => a?.isAdmin === true },
+  'sponsor.summary.read': { signedIn: true, allow: (a, r) => r?.kind === 'sponsor' && a?.sponsors.has(r.id) === true },
 } satisfies Record<string, Rule>;
 
 export type PolicyAction = keyof typeof rules;
@@ -80,6 +86,7 @@ export function isPublicAction(action: PolicyAction): boolean {
 /** May the actor see this resource exists at all? Hidden ones answer 404, never 401/403. */
 export function canSee(actor: Actor, resource: Resource | undefined): boolean {
   if (!resource || resource.kind === 'account') return true;
+  if (resource.kind === 'sponsor') return actor?.sponsors.has(resource.id) === true;
   // Deleted things stay visible to their owner only, for the 30 days they can be restored.
   if (resource.deleted) return isOwner(actor, resource);
   if (isTeam(actor, resource)) return true;

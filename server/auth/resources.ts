@@ -106,6 +106,12 @@ export async function postResource(deps: AppDeps, params: { postId: number }): P
     : null;
 }
 
+/** The sponsor organisation named by `:slug`, for its summary (the policy hides it from non-members). */
+export async function sponsorBySlugResource(deps: AppDeps, params: { slug: string }): Promise<Resource | null> {
+  const s = await deps.db.selectFrom('sponsors').select('id').where('slug', '=', params.slug).executeTakeFirst();
+  return s ? { kind: 'sponsor', id: s.id } : null;
+}
+
 /** The build a sponsorship (`:sponsorshipId`) belongs to. */
 export async function sponsorshipBuildResource(deps: AppDeps, params: { sponsorshipId: number }): Promise<Resource | null> {
   const s = await deps.db.selectFrom('sponsorships').select('build_id').where('id', '=', params.sponsorshipId).executeTakeFirst();

@@ -28,8 +28,10 @@ export function filesRouter(deps: AppDeps, sessionAndActor: RequestHandler[]): R
             .where('kind', '<>', 'receipt')
             .executeTakeFirst()
         : undefined;
+    // A sponsor organisation's logo credits it publicly (build pages, disclosures): anyone may fetch it.
+    const isLogo = row?.sponsor_id != null && row.kind === 'logo';
     const resource = row?.build_id ? await buildResource(deps, { buildId: row.build_id }) : null;
-    if (!row || !resource || !canSee(actorOf(req), resource)) {
+    if (!row || (!isLogo && (!resource || !canSee(actorOf(req), resource)))) {
       res.status(404).type('text/plain').send('Not found');
       return;
     }
@@ -48,7 +50,7 @@ export function filesRouter(deps: AppDeps, sessionAndActor: RequestHandler[]): R
       res.status(503).setHeader('retry-after', '5').type('text/plain').send('Storage unavailable');
       return;
     }
-    const isPublic = resource.kind === 'build' && resource.visibility !== 'private';
+    const isPublic = isLogo || (resource?.kind === 'build' && resource.visibility !== 'private');
     res.status(200);
     res.type(key === wanted && name.endsWith('.webp') ? 'image/webp' : (type ?? row.content_type));
     res.setHeader('x-content-type-options', 'nosniff');

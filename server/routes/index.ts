@@ -15,6 +15,7 @@ import { episodeRoutes } from './episodes';
 import { healthRoutes } from './health';
 import { invitationRoutes } from './invitations';
 import { sessionRoutes } from './session';
+import { sponsorAdminRoutes, sponsorSummaryRoutes } from './sponsors';
 import { sponsorshipRoutes } from './sponsorships';
 
 /** The route registry: every API route, in one list that the authorisation matrix and fuzzers read. */
@@ -35,5 +36,7 @@ export const routeRegistry: readonly RouteSpec[] = [
   ...mediaRoutes,
   ...postRoutes,
   ...followingRoutes,
+  ...sponsorAdminRoutes,
+  ...sponsorSummaryRoutes,
   ...sponsorshipRoutes,
 ];

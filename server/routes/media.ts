@@ -30,7 +30,8 @@ const upload = multer({
   limits: { fileSize: MAX_UPLOAD_BYTES, files: 1, fields: 5, fieldSize: 2_000, parts: 8 },
 }).single('file');
 
-function receiveFile(req: Request, res: Response): Promise<Express.Multer.File | undefined> {
+/** Reads the one multipart file of an upload into memory (413 past the size limit, 400 for anything else wrong). */
+export function receiveFile(req: Request, res: Response): Promise<Express.Multer.File | undefined> {
   return new Promise((resolve, reject) => {
     upload(req, res, (err: unknown) => {
       if (err instanceof multer.MulterError) {

@@ -27,20 +27,44 @@ export function presentInvitation(r: Row): Invitation {
   };
 }
 
-async function sendInvitationEmail(deps: AppDeps, trx: AppDeps['db'], to: string, token: string, buildTitle: string, inviter: string) {
+/** What an invitation is to: a build's team, or a sponsor organisation. */
+type InvitationTarget = { kind: 'build-editor'; title: string } | { kind: 'sponsor-member'; title: string };
+
+async function sendInvitationEmail(
+  deps: AppDeps,
+  trx: AppDeps['db'],
+  to: string,
+  token: string,
+  target: InvitationTarget,
+  inviter: string,
+) {
   const link = `${deps.config.PUBLIC_URL}/invitations/accept#token=${token}`;
+  const sponsor = target.kind === 'sponsor-member';
   await deps.outbox.enqueue(trx, {
     to,
     kind: 'invitation',
-    subject: `${inviter} invites you to help edit "${buildTitle}" on Rivet & Reel`,
+    subject: sponsor
+      ? `${inviter} invites you to join ${target.title} on Rivet & Reel`
+      : `${inviter} invites you to help edit "${target.title}" on Rivet & Reel`,
     text: [
-      `${inviter} would like you to help edit the build "${buildTitle}" on Rivet & Reel.`,
+      sponsor
+        ? `${inviter} would like you to join the sponsor organisation ${target.title} on Rivet & Reel. Members see where the organisation's support appeared in published episodes, and get a notice when a new one goes out.`
+        : `${inviter} would like you to help edit the build "${target.title}" on Rivet & Reel.`,
       '',
       `Open this link to accept: ${link}`,
       '',
       `It works once and expires in ${INVITATION_DAYS} days.`,
     ].join('\n'),
   });
+}
+
+async function invitationTarget(trx: AppDeps['db'], inv: Pick<Row, 'kind' | 'build_id' | 'sponsor_id'>): Promise<InvitationTarget> {
+  if (inv.kind === 'sponsor-member') {
+    const s = await trx.selectFrom('sponsors').select('name').where('id', '=', inv.sponsor_id!).executeTakeFirstOrThrow();
+    return { kind: 'sponsor-member', title: s.name };
+  }
+  const b = await trx.selectFrom('builds').select('title').where('id', '=', inv.build_id!).executeTakeFirstOrThrow();
+  return { kind: 'build-editor', title: b.title };
 }
 
 /** Invites an address to edit a build; a pending invitation to the same address is replaced. */
@@ -80,7 +104,7 @@ export async function inviteEditor(deps: AppDeps, inviterId: number, buildId: nu
       })
       .returningAll()
       .executeTakeFirstOrThrow();
-    await sendInvitationEmail(deps, trx, email, token, build.title, inviter.display_name);
+    await sendInvitationEmail(deps, trx, email, token, { kind: 'build-editor', title: build.title }, inviter.display_name);
     return presentInvitation(row);
   });
 }
@@ -101,7 +125,7 @@ export async function resendInvitation(deps: AppDeps, invitationId: number): Pro
   return deps.db.transaction().execute(async (trx) => {
     const inv = await trx.selectFrom('invitations').selectAll().where('id', '=', invitationId).forUpdate().executeTakeFirstOrThrow();
     if (inv.accepted_at || inv.revoked_at) throw new HttpError(409, 'invitation_closed', 'This invitation was already accepted or revoked');
-    const build = await trx.selectFrom('builds').select('title').where('id', '=', inv.build_id!).executeTakeFirstOrThrow();
+    const target = await invitationTarget(trx, inv);
     const inviter = inv.invited_by
       ? await trx.selectFrom('users').select('display_name').where('id', '=', inv.invited_by).executeTakeFirst()
       : undefined;
@@ -112,7 +136,14 @@ export async function resendInvitation(deps: AppDeps, invitationId: number): Pro
       .where('id', '=', invitationId)
       .returningAll()
       .executeTakeFirstOrThrow();
-    await sendInvitationEmail(deps, trx, inv.email, token, build.title, inviter?.display_name ?? 'The build owner');
+    await sendInvitationEmail(
+      deps,
+      trx,
+      inv.email,
+      token,
+      target,
+      inviter?.display_name ?? (target.kind === 'sponsor-member' ? 'Rivet & Reel' : 'The build owner'),
+    );
     return presentInvitation(row);
   });
 }
@@ -132,7 +163,8 @@ export async function revokeInvitation(deps: AppDeps, invitationId: number): Pro
 export async function lookupInvitation(deps: AppDeps, token: string): Promise<InvitationLookup> {
   const row = await deps.db
     .selectFrom('invitations as i')
-    .innerJoin('builds as b', 'b.id', 'i.build_id')
+    .leftJoin('builds as b', 'b.id', 'i.build_id')
+    .leftJoin('sponsors as s', 's.id', 'i.sponsor_id')
     .leftJoin('users as u', 'u.id', 'i.invited_by')
     .select([
       'i.kind',
@@ -140,8 +172,8 @@ export async function lookupInvitation(deps: AppDeps, token: string): Promise<In
       'i.accepted_at',
       'i.revoked_at',
       'i.expires_at',
-      'b.id as target_id',
-      'b.title as target_title',
+      sql<number>`coalesce(b.id, s.id)`.as('target_id'),
+      sql<string>`coalesce(b.title, s.name)`.as('target_title'),
       'u.display_name as inviter',
     ])
     .where('i.token_hash', '=', hashToken(token))
@@ -156,7 +188,7 @@ export async function lookupInvitation(deps: AppDeps, token: string): Promise<In
   };
 }
 
-/** Accepts an invitation for the signed-in account: it joins the build team as an editor. */
+/** Accepts an invitation for the signed-in account: it joins the build team as an editor, or the sponsor organisation. */
 export async function acceptInvitation(
   deps: AppDeps,
   userId: number,
@@ -166,16 +198,78 @@ export async function acceptInvitation(
     const inv = await trx.selectFrom('invitations').selectAll().where('token_hash', '=', hashToken(token)).forUpdate().executeTakeFirst();
     if (!inv) throw new HttpError(404, 'not_found', 'This invitation link is not valid');
     if (status(inv) !== 'pending') throw new HttpError(409, 'invitation_closed', `This invitation was ${status(inv)}`);
-    await trx
-      .insertInto('build_members')
-      .values({ build_id: inv.build_id!, user_id: userId, role: 'editor' })
-      .onConflict((oc) => oc.columns(['build_id', 'user_id']).doNothing())
-      .execute();
+    if (inv.kind === 'sponsor-member')
+      await trx
+        .insertInto('sponsor_members')
+        .values({ sponsor_id: inv.sponsor_id!, user_id: userId })
+        .onConflict((oc) => oc.columns(['sponsor_id', 'user_id']).doNothing())
+        .execute();
+    else
+      await trx
+        .insertInto('build_members')
+        .values({ build_id: inv.build_id!, user_id: userId, role: 'editor' })
+        .onConflict((oc) => oc.columns(['build_id', 'user_id']).doNothing())
+        .execute();
     await trx
       .updateTable('invitations')
       .set({ accepted_at: sql<Date>`now()`, accepted_by: userId })
       .where('id', '=', inv.id)
       .execute();
-    return { kind: inv.kind, targetId: inv.build_id! };
+    return { kind: inv.kind, targetId: (inv.kind === 'sponsor-member' ? inv.sponsor_id : inv.build_id)! };
   });
+}
+
+/** Invites an address to join a sponsor organisation (admins); a pending invitation to the same address is replaced. */
+export async function inviteSponsorMember(deps: AppDeps, inviterId: number, sponsorId: number, email: string): Promise<Invitation> {
+  return deps.db.transaction().execute(async (trx) => {
+    const sponsor = await trx.selectFrom('sponsors').select('name').where('id', '=', sponsorId).executeTakeFirst();
+    if (!sponsor) throw new HttpError(404, 'not_found', 'No such sponsor organisation');
+    const inviter = await trx.selectFrom('users').select('display_name').where('id', '=', inviterId).executeTakeFirstOrThrow();
+    const already = await trx
+      .selectFrom('sponsor_members as m')
+      .innerJoin('users as u', 'u.id', 'm.user_id')
+      .select('m.id')
+      .where('m.sponsor_id', '=', sponsorId)
+      .where(sql`lower(u.email)`, '=', email)
+      .executeTakeFirst();
+    if (already)
+      throw new HttpError(409, 'already_member', 'That address already belongs to a member of this organisation', {
+        email: ['already a member'],
+      });
+    await trx
+      .updateTable('invitations')
+      .set({ revoked_at: sql<Date>`now()` })
+      .where('sponsor_id', '=', sponsorId)
+      .where('email', '=', email)
+      .where('accepted_at', 'is', null)
+      .where('revoked_at', 'is', null)
+      .execute();
+    const { token, hash } = newToken();
+    const row = await trx
+      .insertInto('invitations')
+      .values({
+        kind: 'sponsor-member',
+        sponsor_id: sponsorId,
+        email,
+        token_hash: hash,
+        invited_by: inviterId,
+        expires_at: sql<Date>`now() + make_interval(days => ${INVITATION_DAYS})`,
+      })
+      .returningAll()
+      .executeTakeFirstOrThrow();
+    await sendInvitationEmail(deps, trx, email, token, { kind: 'sponsor-member', title: sponsor.name }, inviter.display_name);
+    return presentInvitation(row);
+  });
+}
+
+/** A sponsor organisation's invitations, newest first. */
+export async function listSponsorInvitations(db: AppDeps['db'], sponsorId: number): Promise<Invitation[]> {
+  const rows = await db
+    .selectFrom('invitations')
+    .selectAll()
+    .where('sponsor_id', '=', sponsorId)
+    .orderBy('created_at', 'desc')
+    .limit(200)
+    .execute();
+  return rows.map(presentInvitation);
 }

@@ -9,7 +9,8 @@ export const NOTICE_SETTINGS_PATH = '/account/notices';
 export interface NoticeMailInput {
   to: string;
   userId: number;
-  scope: UnsubscribeScope;
+  /** What the one-click unsubscribe link stops; without one (a membership notice) the mail has no such link. */
+  scope?: UnsubscribeScope;
   kind: string;
   subject: string;
   /** Plain paragraphs, in order. */
@@ -27,20 +28,23 @@ const escapeHtml = (s: string) =>
 export function noticeMail(config: Pick<Config, 'PUBLIC_URL' | 'SESSION_SECRET'>, m: NoticeMailInput): QueuedEmail {
   const base = config.PUBLIC_URL.replace(/\/$/, '');
   const abs = (p: string) => `${base}${p}`;
-  const token = unsubscribeToken(config.SESSION_SECRET, m.userId, m.scope);
-  const unsubscribeUrl = abs(`/api/unsubscribe?u=${m.userId}&s=${m.scope}&t=${token}`);
   const settingsUrl = abs(NOTICE_SETTINGS_PATH);
   const text = [
     ...m.paragraphs,
     ...m.links.map((l) => `${l.label}: ${abs(l.path)}`),
     '-- ',
-    `${m.reason} Change what we send you: ${settingsUrl}`,
+    m.scope ? `${m.reason} Change what we send you: ${settingsUrl}` : m.reason,
   ].join('\n\n');
   const html = [
     ...m.paragraphs.map((p) => `<p>${escapeHtml(p)}</p>`),
     ...m.links.map((l) => `<p><a href="${escapeHtml(abs(l.path))}">${escapeHtml(l.label)}</a></p>`),
-    `<hr><p style="color:#66625B;font-size:13px">${escapeHtml(m.reason)} <a href="${escapeHtml(settingsUrl)}">Change what we send you</a>.</p>`,
+    m.scope
+      ? `<hr><p style="color:#66625B;font-size:13px">${escapeHtml(m.reason)} <a href="${escapeHtml(settingsUrl)}">Change what we send you</a>.</p>`
+      : `<hr><p style="color:#66625B;font-size:13px">${escapeHtml(m.reason)}</p>`,
   ].join('\n');
+  if (!m.scope) return { to: m.to, subject: m.subject, text, html, kind: m.kind };
+  const token = unsubscribeToken(config.SESSION_SECRET, m.userId, m.scope);
+  const unsubscribeUrl = abs(`/api/unsubscribe?u=${m.userId}&s=${m.scope}&t=${token}`);
   return {
     to: m.to,
     subject: m.subject,

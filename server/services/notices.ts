@@ -7,6 +7,7 @@ import type { Database } from '../db/database';
 import type { NoticeEmail } from '../db/followers-tables';
 import { noticeMail } from './notice-mail';
 import { noticeRecipients, type NoticeRecipient } from './notice-recipients';
+import { noticeSponsorMembers } from './sponsor-notices';
 
 export type NoticeDeps = Pick<AppDeps, 'outbox' | 'config'>;
 type Trx = Kysely<Database>;
@@ -27,9 +28,13 @@ const episodePath = (e: EpisodeFacts) => paths.episode(e.owner_handle, e.build_s
 /**
  * Announces a newly published episode to the people following its build or (for a public build)
  * its creator: once per episode, ever (publish now, the scheduled job, or a re-publish), and once
- * per person however many of their follows match. Call inside the publishing transaction.
+ * per person however many of their follows match; and the members of each organisation whose
+ * support is on it (sponsor-notices.ts). Call inside the publishing transaction.
  */
 export async function announceEpisode(trx: Trx, deps: NoticeDeps, episodeId: number): Promise<number> {
+  // Sponsors' members are told on every publish, once each per episode (their own unique index),
+  // so support added before a re-publish still reaches its organisation.
+  await noticeSponsorMembers(trx, deps, episodeId);
   const fresh = await trx
     .insertInto('episode_announcements')
     .values({ episode_id: episodeId })

@@ -163,6 +163,22 @@ export function createRoutes({ queryClient, api }: RouteDeps): RouteObject[] {
             return { loader: m.buildLedgerLoader(deps), Component: m.BuildLedgerPage };
           },
         },
+        {
+          path: 'workbench/builds/:buildId/sponsors/:sponsorId',
+          id: 'team-sponsor-summary',
+          lazy: async () => {
+            const m = await import('../routes/team-sponsor-summary');
+            return { loader: m.teamSponsorSummaryLoader(deps), Component: m.TeamSponsorSummaryPage };
+          },
+        },
+        {
+          path: 'sponsors/:slug',
+          id: 'sponsor-summary',
+          lazy: async () => {
+            const m = await import('../routes/sponsor-summary');
+            return { loader: m.sponsorSummaryLoader(deps), Component: m.SponsorSummaryPage };
+          },
+        },
         // A lazy module (the editor and Tiptap load only here); it reads its data through hooks, so the
         // loader only sends visitors to sign in.
         {
@@ -230,6 +246,22 @@ export function createRoutes({ queryClient, api }: RouteDeps): RouteObject[] {
           lazy: async () => {
             const m = await import('../routes/admin-suppliers');
             return { loader: m.adminSuppliersLoader(deps), Component: m.AdminSuppliersPage };
+          },
+        },
+        {
+          path: 'admin/sponsors',
+          id: 'admin-sponsors',
+          lazy: async () => {
+            const m = await import('../routes/admin-sponsors');
+            return { loader: m.adminSponsorsLoader(deps), Component: m.AdminSponsorsPage };
+          },
+        },
+        {
+          path: 'admin/sponsors/:sponsorId',
+          id: 'admin-sponsor',
+          lazy: async () => {
+            const m = await import('../routes/admin-sponsor');
+            return { loader: m.adminSponsorLoader(deps), Component: m.AdminSponsorPage };
           },
         },
         { path: '*', id: NOT_FOUND_ROUTE_ID, Component: NotFound },

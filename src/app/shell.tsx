@@ -5,6 +5,7 @@ import { AccountMenu, type AccountMenuItem } from '../features/accounts/componen
 import { accountPaths } from '../features/accounts/paths';
 import { adminPaths } from '../features/admin/paths';
 import { HeaderNotices } from '../features/following/components/header-notices';
+import { sponsorPaths } from '../features/sponsors/paths';
 import { workbenchPaths } from '../features/workbench/paths';
 import { Notice } from '../components/ui/notice';
 import { StateMessage } from '../components/ui/state-message';
@@ -56,10 +57,17 @@ export function accountMenuItems(account: Account): AccountMenuItem[] {
   if (account.builds.length) items.splice(1, 0, { label: 'Inbox', to: '/inbox' });
   items.push({ label: 'Account settings', to: accountPaths.settings() }, { label: 'Notice settings', to: '/account/notices' });
   if (account.builds.some((b) => b.role === 'owner')) items.push({ label: 'Build teams', to: accountPaths.builds() });
+  // A member of several organisations gets one summary entry each, named.
+  for (const s of account.sponsors)
+    items.push({
+      label: account.sponsors.length > 1 ? `Sponsor summary: ${s.sponsorName}` : 'Sponsor summary',
+      to: sponsorPaths.summary(s.sponsorSlug),
+    });
   if (account.isAdmin)
     items.push(
       { label: 'Accounts', to: adminPaths.accounts() },
       { label: 'Suppliers', to: adminPaths.suppliers() },
+      { label: 'Sponsor organisations', to: adminPaths.sponsors() },
       { label: 'Moderation queue', to: '/moderation' },
     );
   return items;
@@ -153,7 +161,7 @@ function HeaderSearch() {
 
 export function SiteHeader() {
   return (
-    <header className="on-ink bg-ink text-paper">
+    <header className="on-ink bg-ink text-paper print:hidden">
       <div className="page-wrap flex flex-wrap items-center gap-x-7 gap-y-1 py-2">
         <Link
           to={paths.home()}
@@ -184,7 +192,7 @@ export function SiteHeader() {
 
 export function SiteFooter() {
   return (
-    <footer className="mt-16 border-t border-rule bg-paper-2">
+    <footer className="mt-16 border-t border-rule bg-paper-2 print:hidden">
       <div className="page-wrap py-6 text-[15px] text-ink-2">
         <p className="font-serif font-bold text-ink">{PRODUCT_NAME}</p>
         <p className="mt-1 max-w-measure">

@@ -19,7 +19,10 @@ export function InvitationAcceptPage() {
     <>
       <title>Your invitation — Rivet &amp; Reel</title>
       <meta name="robots" content="noindex" />
-      <PageHeading label="Invitation" title="Join a build team" />
+      <PageHeading
+        label="Invitation"
+        title={lookup.data?.kind === 'sponsor-member' ? 'Join a sponsor organisation' : 'Join a build team'}
+      />
       <div className="mt-6 max-w-measure">
         {fragment.state === 'missing' ? (
           <StateMessage kind="empty" title="This address has no invitation token.">
@@ -114,7 +117,10 @@ function AcceptAction({ token, kind, targetTitle }: { token: string; kind: Invit
   const onAccept = () =>
     accept.mutate(token, {
       onSuccess: ({ targetId }) => {
-        const notice = kind === 'build-editor' ? `You joined the build team of ${targetTitle}.` : `You joined ${targetTitle}.`;
+        const notice =
+          kind === 'build-editor'
+            ? `You joined the build team of ${targetTitle}.`
+            : `You joined ${targetTitle}. Its sponsor summary is in your account menu.`;
         void navigate(kind === 'build-editor' ? accountPaths.team(targetId) : '/', { state: { notice } });
       },
     });

@@ -12,6 +12,7 @@ import { DeleteBuildSection } from '../features/builds/components/delete-build-s
 import { TransferSection } from '../features/builds/components/transfer-section';
 import { buildValues, changedFields } from '../features/builds/lib/build-form';
 import { BuildCoverControl } from '../features/media/components/build-cover-control';
+import { BuildSponsorSummaries } from '../features/sponsors/components/build-sponsor-summaries';
 import { workbenchPaths } from '../features/workbench/paths';
 import { SponsorshipsSection } from '../features/sponsors/components/sponsorships-section';
 import { DEFAULT_SYSTEMS, type Build } from '../shared/schemas/builds';
@@ -53,7 +54,11 @@ function SettingsScreen({ build }: { build: Build }) {
         <ButtonLink to={workbenchPaths.buildLedger(build.id)}>Ledger</ButtonLink>
         <ButtonLink to={accountPaths.team(build.id)}>Build team</ButtonLink>
       </nav>
-      <div className="mt-8 space-y-12">{owner ? <OwnerSettings build={build} /> : <BuildSettingsSummary build={build} />}</div>
+      <div className="mt-8 space-y-12">
+        {owner ? <OwnerSettings build={build} /> : <BuildSettingsSummary build={build} />}
+        {/* Owner and editors alike read each sponsor's summary of the build. */}
+        <BuildSponsorSummaries buildId={build.id} />
+      </div>
     </>
   );
 }

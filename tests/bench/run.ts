@@ -76,6 +76,11 @@ async function main() {
         [ids.episode_id],
       )
     ).rows[0]!;
+    // The summary is its members' alone (404 to anyone else): the bench reader joins the largest sponsor.
+    await db.query(`insert into sponsor_members (sponsor_id, user_id) select id, $1 from sponsors where slug = $2 on conflict do nothing`, [
+      ids.reader,
+      LARGE.largestSponsor,
+    ]);
     await db.end();
     log(`large episode: ${size.chapters} chapters, ${size.lines} part lines, ${size.posts} posts`);
 
@@ -95,9 +100,21 @@ async function main() {
     const routes = await sponsorSummaryAvailable(base);
     const session = await benchSession(databaseUrl, base, SESSION_SECRET, ids.reader);
     const episodePath = `/builds/${LARGE.handle}/${LARGE.buildSlug}/episodes/${LARGE.episodeSlug}`;
-    const question = JSON.stringify({ kind: 'question', chapterStartSeconds: 0, body: 'Which torque figure did you use for the caliper bolts?' });
+    const question = JSON.stringify({
+      kind: 'question',
+      chapterStartSeconds: 0,
+      body: 'Which torque figure did you use for the caliper bolts?',
+    });
     const writeHeaders = { cookie: session.cookie, 'x-csrf-token': session.csrf, 'content-type': 'application/json' };
-    const plan: Array<{ name: string; path: string; method?: 'POST'; headers?: Record<string, string>; body?: string; status?: number; skip?: string }> = [
+    const plan: Array<{
+      name: string;
+      path: string;
+      method?: 'POST';
+      headers?: Record<string, string>;
+      body?: string;
+      status?: number;
+      skip?: string;
+    }> = [
       { name: 'front-page', path: '/' },
       { name: 'episode-read', path: `/api/episodes/${ids.episode_id}/reading` },
       { name: 'episode-page', path: episodePath },
@@ -105,15 +122,32 @@ async function main() {
       {
         name: 'sponsor-summary',
         path: `/api/sponsors/${LARGE.largestSponsor}/summary`,
+        headers: { cookie: session.cookie },
         skip: routes ? undefined : 'not available (GET /api/sponsors/:slug/summary is not in the route registry yet)',
       },
       { name: 'search', path: '/api/search?q=caliper%20piston' },
-      { name: 'post-question', path: `/api/episodes/${ids.other_episode}/posts`, method: 'POST', headers: writeHeaders, body: question, status: 201 },
+      {
+        name: 'post-question',
+        path: `/api/episodes/${ids.other_episode}/posts`,
+        method: 'POST',
+        headers: writeHeaders,
+        body: question,
+        status: 201,
+      },
     ];
     for (const c of plan) {
       if (c.skip) {
         log(`${c.name}: ${c.skip}`);
-        cases.push({ name: c.name, rps: 0, p50_ms: 0, p99_ms: 0, errors: 0, ratio_to_baseline: null, queries_per_request: null, note: c.skip });
+        cases.push({
+          name: c.name,
+          rps: 0,
+          p50_ms: 0,
+          p99_ms: 0,
+          errors: 0,
+          ratio_to_baseline: null,
+          queries_per_request: null,
+          note: c.skip,
+        });
         continue;
       }
       log(`${c.name} …`);
@@ -122,13 +156,26 @@ async function main() {
       if (probe.status !== (c.status ?? 200)) throw new Error(`${c.name}: ${c.path} answered ${probe.status}: ${await probe.text()}`);
       await probe.arrayBuffer();
       const qpr = await queriesPerRequest(base, send);
-      const r = await measure({ url: `${base}${c.path}`, connections: CONNECTIONS, seconds: SECONDS, method: c.method, headers: c.headers, body: c.body, expectStatus: c.status });
+      const r = await measure({
+        url: `${base}${c.path}`,
+        connections: CONNECTIONS,
+        seconds: SECONDS,
+        method: c.method,
+        headers: c.headers,
+        body: c.body,
+        expectStatus: c.status,
+      });
       cases.push({ name: c.name, ...pick(r), ratio_to_baseline: round(r.rps / baseline.rps), queries_per_request: qpr });
     }
 
     log('aggregates against the same SQL through pg …');
     aggregates.push(await timeAggregate('ledger-totals', base, databaseUrl, `/api/builds/${ids.build_id}/totals`));
-    if (routes) aggregates.push(await timeAggregate('sponsor-summary', base, databaseUrl, `/api/sponsors/${LARGE.largestSponsor}/summary`));
+    if (routes)
+      aggregates.push(
+        await timeAggregate('sponsor-summary', base, databaseUrl, `/api/sponsors/${LARGE.largestSponsor}/summary`, 15, {
+          cookie: session.cookie,
+        }),
+      );
     else aggregates.push({ name: 'sponsor-summary', ms: null, raw_sql_ms: null, ratio: null, note: 'not available' });
   } finally {
     await server.stop();
@@ -144,7 +191,10 @@ async function main() {
     env: { ...process.env, BENCH_RUNS: process.env.BENCH_MEDIA_RUNS ?? '3' },
   });
   const mediaFile = path.join(root, '.bench', 'media.json');
-  const media = mediaRun.status === 0 && existsSync(mediaFile) ? (JSON.parse(readFileSync(mediaFile, 'utf8')) as Record<string, unknown>) : { error: `bench:media exited ${mediaRun.status}` };
+  const media =
+    mediaRun.status === 0 && existsSync(mediaFile)
+      ? (JSON.parse(readFileSync(mediaFile, 'utf8')) as Record<string, unknown>)
+      : { error: `bench:media exited ${mediaRun.status}` };
 
   const results = {
     date: new Date().toISOString(),
@@ -154,7 +204,11 @@ async function main() {
     seconds_per_case: SECONDS,
     cases,
     aggregates,
-    bundle: { episode_initial_js_gzip_kb: bundle.episode_initial_js_gzip_kb, editor_chunk_gzip_kb: bundle.editor_chunk_gzip_kb, css_gzip_kb: bundle.css_gzip_kb },
+    bundle: {
+      episode_initial_js_gzip_kb: bundle.episode_initial_js_gzip_kb,
+      editor_chunk_gzip_kb: bundle.editor_chunk_gzip_kb,
+      css_gzip_kb: bundle.css_gzip_kb,
+    },
     media,
   };
   print(results, baselineOf(cases));
@@ -182,8 +236,21 @@ function targetOf(c: CaseResult, baseline: CaseResult): string {
   return '';
 }
 
-function print(r: { date: string; cores: number; scale: number; cases: CaseResult[]; aggregates: unknown[]; bundle: Record<string, number>; media: Record<string, unknown> }, baseline: CaseResult) {
-  console.log(`\nRivet & Reel benchmark — ${r.date}, ${r.cores} cores, scale ${r.scale}, ${CONNECTIONS} connections, ${SECONDS} s per case`);
+function print(
+  r: {
+    date: string;
+    cores: number;
+    scale: number;
+    cases: CaseResult[];
+    aggregates: unknown[];
+    bundle: Record<string, number>;
+    media: Record<string, unknown>;
+  },
+  baseline: CaseResult,
+) {
+  console.log(
+    `\nRivet & Reel benchmark — ${r.date}, ${r.cores} cores, scale ${r.scale}, ${CONNECTIONS} connections, ${SECONDS} s per case`,
+  );
   console.table(
     Object.fromEntries(
       r.cases.map((c) => [

@@ -32,8 +32,13 @@ export interface World {
     post: number;
     /** A sponsorship of build A by the world's sponsor. */
     sponsorship: number;
+    /** The sponsor organisation the sponsorMember belongs to, a supplier it backs, a pending member invitation. */
+    sponsor: number;
+    sponsorMember: number;
+    sponsorSupplier: number;
+    sponsorInvitation: number;
   };
-  slugs: { owner: string; buildA: string; draft: string };
+  slugs: { owner: string; buildA: string; draft: string; sponsor: string };
   clients: Record<ActorName, TestClient>;
 }
 
@@ -323,6 +328,68 @@ export const routeMatrix: Record<string, MatrixRow> = {
     expect: ownerOnly(204),
     freshWorldPerActor: true,
   },
+  // Sponsors: admins keep the organisations; a member reads its own organisation's summary, which
+  // exists for no one else (404, admins included: they manage organisations, not read their reports);
+  // the build team reads each sponsor's summary of its own build.
+  'GET /admin/sponsors': { request: () => ({ path: '/api/admin/sponsors' }), expect: adminOnly(200) },
+  'POST /admin/sponsors': { request: () => ({ path: '/api/admin/sponsors', body: { name: '' } }), expect: adminOnly(400) },
+  'GET /admin/sponsors/:sponsorId': { request: (w) => ({ path: `/api/admin/sponsors/${w.ids.sponsor}` }), expect: adminOnly(200) },
+  'PUT /admin/sponsors/:sponsorId': {
+    request: (w) => ({ path: `/api/admin/sponsors/${w.ids.sponsor}`, body: {} }),
+    expect: adminOnly(400),
+  },
+  'POST /admin/sponsors/:sponsorId/logo': {
+    request: (w) => ({ path: `/api/admin/sponsors/${w.ids.sponsor}/logo`, body: {} }),
+    expect: adminOnly(400),
+  },
+  'DELETE /admin/sponsors/:sponsorId/logo': {
+    request: (w) => ({ path: `/api/admin/sponsors/${w.ids.sponsor}/logo` }),
+    expect: adminOnly(204),
+  },
+  'PUT /admin/sponsors/:sponsorId/suppliers/:supplierId': {
+    request: (w) => ({ path: `/api/admin/sponsors/${w.ids.sponsor}/suppliers/${w.ids.sponsorSupplier}`, body: { junk: 1 } }),
+    expect: adminOnly(400),
+  },
+  'DELETE /admin/sponsors/:sponsorId/suppliers/:supplierId': {
+    request: (w) => ({ path: `/api/admin/sponsors/${w.ids.sponsor}/suppliers/${w.ids.sponsorSupplier}` }),
+    expect: adminOnly(204),
+  },
+  'POST /admin/sponsors/:sponsorId/invitations': {
+    request: (w) => ({ path: `/api/admin/sponsors/${w.ids.sponsor}/invitations`, body: { email: 'nope' } }),
+    expect: adminOnly(400),
+  },
+  'POST /admin/sponsors/:sponsorId/invitations/:invitationId/resend': {
+    request: (w) => ({ path: `/api/admin/sponsors/${w.ids.sponsor}/invitations/${w.ids.sponsorInvitation}/resend`, body: { junk: 1 } }),
+    expect: adminOnly(400),
+  },
+  'DELETE /admin/sponsors/:sponsorId/invitations/:invitationId': {
+    request: (w) => ({ path: `/api/admin/sponsors/${w.ids.sponsor}/invitations/${w.ids.sponsorInvitation}` }),
+    expect: adminOnly(204),
+  },
+  'DELETE /admin/sponsors/:sponsorId/members/:userId': {
+    request: (w) => ({ path: `/api/admin/sponsors/${w.ids.sponsor}/members/${w.ids.sponsorMember}` }),
+    expect: adminOnly(204),
+  },
+  'GET /sponsors/:slug/summary': {
+    request: (w) => ({ path: `/api/sponsors/${w.slugs.sponsor}/summary` }),
+    expect: { ...all(404), sponsorMember: 200 },
+  },
+  'GET /sponsors/:slug/summary.csv': {
+    request: (w) => ({ path: `/api/sponsors/${w.slugs.sponsor}/summary.csv` }),
+    expect: { ...all(404), sponsorMember: 200 },
+  },
+  'GET /builds/:buildId/sponsor-summaries': {
+    request: (w) => ({ path: `/api/builds/${w.ids.buildA}/sponsor-summaries` }),
+    expect: teamOnly(200),
+  },
+  'GET /builds/:buildId/sponsors/:sponsorId/summary': {
+    request: (w) => ({ path: `/api/builds/${w.ids.buildA}/sponsors/${w.ids.sponsor}/summary` }),
+    expect: teamOnly(200),
+  },
+  'GET /builds/:buildId/sponsors/:sponsorId/summary.csv': {
+    request: (w) => ({ path: `/api/builds/${w.ids.buildA}/sponsors/${w.ids.sponsor}/summary.csv` }),
+    expect: teamOnly(200),
+  },
 };
 
 /** A fresh cast: build A (public) with its owner and an editor, build B with another owner, a sponsor with a member, an admin. */
@@ -349,6 +416,24 @@ export async function makeWorld(app: TestApp, visibility: 'public' | 'unlisted' 
     .returning('id')
     .executeTakeFirstOrThrow();
   await db.insertInto('sponsor_members').values({ sponsor_id: sponsor.id, user_id: users.sponsorMember.id }).execute();
+  const sponsorSupplier = await db
+    .insertInto('suppliers')
+    .values({ name: `Backed supplier ${buildA.id}`, website: null, created_by: null })
+    .returning('id')
+    .executeTakeFirstOrThrow();
+  await db.insertInto('sponsor_suppliers').values({ sponsor_id: sponsor.id, supplier_id: sponsorSupplier.id }).execute();
+  const sponsorInvitation = await db
+    .insertInto('invitations')
+    .values({
+      kind: 'sponsor-member',
+      sponsor_id: sponsor.id,
+      email: `sponsor-invitee-${buildA.id}@example.test`,
+      token_hash: hashToken(`matrix-sponsor-token-${buildA.id}`),
+      invited_by: users.admin.id,
+      expires_at: sql<Date>`now() + interval '7 days'`,
+    })
+    .returning('id')
+    .executeTakeFirstOrThrow();
   const sponsorship = await db
     .insertInto('sponsorships')
     .values({ build_id: buildA.id, sponsor_id: sponsor.id, kind: 'gifted', starts_on: '2026-11-01', ends_on: null })
@@ -480,8 +565,12 @@ export async function makeWorld(app: TestApp, visibility: 'public' | 'unlisted' 
       receipt: receipt.id,
       post: post.id,
       sponsorship: sponsorship.id,
+      sponsor: sponsor.id,
+      sponsorMember: users.sponsorMember.id,
+      sponsorSupplier: sponsorSupplier.id,
+      sponsorInvitation: sponsorInvitation.id,
     },
-    slugs: { owner: ownerRow.handle, buildA: buildA.slug, draft: draft.slug },
+    slugs: { owner: ownerRow.handle, buildA: buildA.slug, draft: draft.slug, sponsor: `sponsor-${buildA.id}` },
     clients,
   };
 }

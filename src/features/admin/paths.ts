@@ -7,5 +7,7 @@ export const adminPaths = {
     const search = params.toString();
     return search ? `/admin/accounts?${search}` : '/admin/accounts';
   },
+  sponsors: () => '/admin/sponsors',
+  sponsor: (sponsorId: number) => `/admin/sponsors/${sponsorId}`,
   suppliers: (q = '') => (q ? `/admin/suppliers?${new URLSearchParams({ q }).toString()}` : '/admin/suppliers'),
 };

@@ -16,20 +16,31 @@ export interface AggregateResult {
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
 
-/** The median time of `runs` sequential requests to `url`, and the same SQL replayed through pg. */
-export async function timeAggregate(name: string, baseUrl: string, databaseUrl: string, path: string, runs = 15): Promise<AggregateResult> {
+/**
+ * The median time of `runs` sequential requests to `url`, and the same SQL replayed through pg.
+ * `headers` carries a session cookie for endpoints that are not public (the sponsor summary).
+ */
+export async function timeAggregate(
+  name: string,
+  baseUrl: string,
+  databaseUrl: string,
+  path: string,
+  runs = 15,
+  headers: Record<string, string> = {},
+): Promise<AggregateResult> {
   const url = `${baseUrl}${path}`;
-  const warm = await fetch(url);
+  const get = () => fetch(url, { headers });
+  const warm = await get();
   if (!warm.ok) throw new Error(`${path} answered ${warm.status}`);
   await warm.arrayBuffer();
   const before = (await queryLog(baseUrl)).queries;
-  await (await fetch(url)).arrayBuffer();
+  await (await get()).arrayBuffer();
   const statements = (await queryLog(baseUrl, before)).log;
 
   const endpoint: number[] = [];
   for (let i = 0; i < runs; i += 1) {
     const t0 = performance.now();
-    await (await fetch(url)).arrayBuffer();
+    await (await get()).arrayBuffer();
     endpoint.push(performance.now() - t0);
   }
 
