@@ -3,12 +3,14 @@ import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
+import { sql } from 'kysely';
 import pino from 'pino';
 import { startS3Fake, type S3Fake } from '../../fakes/s3';
 import { startSmtpFake, type SmtpFake } from '../../fakes/smtp';
 import { createApp } from '../../server/app';
 import { loadConfig, type Config } from '../../server/config';
 import { createDeps, type RunningDeps } from '../../server/deps';
+import { QUEUE_SCHEMA } from '../../server/jobs/queue';
 import { startRoundRobin, type RoundRobin } from './round-robin';
 import { spawnServerProcess, type ServerProcess } from './server-process';
 import { createTestDatabase, existingTestDatabase, type TestDatabase } from './test-db';
@@ -105,10 +107,22 @@ export async function startTestApp(opts: TestAppOptions = {}): Promise<TestApp> 
     async stop() {
       if (front) {
         const codes = await Promise.all(processes.map((p) => p.terminate()));
+        // No duplicates: every e-mail the fake received has a Message-ID of its own. No lost jobs:
+        // the queue's jobs by state once both processes (and their workers) are gone.
+        const ids = smtp.messages().map((m) => m.messageId);
+        const duplicates = ids.filter((id, i) => id !== null && ids.indexOf(id) !== i);
+        const { rows } = await sql<{
+          state: string;
+          n: number;
+        }>`select state, count(*)::int as n from ${sql.table(`${QUEUE_SCHEMA}.job`)} group by state order by state`.execute(deps.db);
         console.log(
-          `[two-processes] requests alternated between two server processes: ${front.counts.join(' and ')}; they exited with ${codes.join(', ')}`,
+          `[two-processes] requests alternated between two server processes: ${front.counts.join(' and ')}; they exited with ${codes.join(', ')}; ` +
+            `${ids.length} e-mails received, ${duplicates.length} duplicated; jobs by state: ${rows.map((r) => `${r.state} ${r.n}`).join(', ') || 'none'}`,
         );
         await front.stop();
+        if (duplicates.length) throw new Error(`e-mail sent twice with two processes: ${duplicates.join(', ')}`);
+        if (codes.some((c) => c !== 0))
+          throw new Error(`a server process exited with ${codes.join(', ')}: ${processes.map((p) => p.stderr()).join('\n')}`);
       }
       server.closeAllConnections();
       await new Promise<void>((resolve) => server.close(() => resolve()));
