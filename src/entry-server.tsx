@@ -5,7 +5,9 @@ import { createStaticHandler, createStaticRouter, StaticRouterProvider } from 'r
 import { serializeHydration, serializeRouteErrors, type HydrationPayload } from './app/hydration-data';
 import { Providers } from './app/providers';
 import { createRoutes, NOT_FOUND_ROUTE_ID } from './app/routes';
+import { sessionOptions } from './features/accounts/api/get-session';
 import { createApiClient } from './lib/api-client';
+import { SESSION_COOKIE } from './shared/http';
 import { createQueryClient } from './lib/query-client';
 
 export interface RenderInput {
@@ -25,6 +27,8 @@ export type RenderResult =
 export async function render({ request, apiBaseUrl, cookie, publicUrl }: RenderInput): Promise<RenderResult> {
   const queryClient = createQueryClient();
   const api = createApiClient({ baseUrl: apiBaseUrl, headers: cookie ? { cookie } : {} });
+  // No session cookie: an anonymous reader. The header's "who is signed in" is known without asking the API.
+  if (!hasSessionCookie(cookie)) queryClient.setQueryData(sessionOptions(api).queryKey, { account: null });
   const handler = createStaticHandler(createRoutes({ queryClient, api }));
   const context = await handler.query(request);
   if (context instanceof Response) return { type: 'response', response: context };
@@ -57,6 +61,10 @@ export async function render({ request, apiBaseUrl, cookie, publicUrl }: RenderI
     html: body,
     data: serializeHydration(payload),
   };
+}
+
+function hasSessionCookie(cookie: string | undefined): boolean {
+  return (cookie ?? '').split(';').some((c) => c.trim().startsWith(`${SESSION_COOKIE}=`));
 }
 
 const HOISTED = /^(?:<title>[^<]*<\/title>|<meta\b[^>]*\/?>|<link\b[^>]*\/?>)/;

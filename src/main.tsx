@@ -10,7 +10,7 @@ import { createQueryClient } from './lib/query-client';
 import './styles.css';
 
 /**
- * Lazy route modules (the episode editor) that match the first URL are loaded before hydrating:
+ * Lazy route modules (every page but the front page) that match the first URL are loaded before hydrating:
  * otherwise the router renders its loading fallback over the server's HTML and hydration fails.
  */
 async function loadLazyMatches(routes: RouteObject[]): Promise<void> {

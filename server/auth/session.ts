@@ -3,8 +3,9 @@ import type { Request } from 'express';
 import session from 'express-session';
 import type pg from 'pg';
 import type { Config } from '../config';
+import { SESSION_COOKIE } from '../../src/shared/http';
 
-export const SESSION_COOKIE = 'rr_sid';
+export { SESSION_COOKIE };
 
 /**
  * Sessions live in PostgreSQL so any server process can serve any request. No row is written

@@ -7,17 +7,17 @@ import {
   supplierCreate,
   supplierMerge,
   type BuildTotals,
-  type EpisodeParts,
   type LedgerResponse,
 } from '../../src/shared/schemas/parts';
 import { signedIn } from '../auth/policy';
 import { buildResource, episodeResource, partLineResource } from '../auth/resources';
-import { buildBreakdowns, ledgerFilter, listLines, partTotals } from '../db/part-lines.queries';
+import { ledgerFilter, listLines, partTotals } from '../db/part-lines.queries';
 import { HttpError } from '../http/http-error';
 import { defineRoute } from '../http/registry';
 import { presentPartLine } from '../presenters/part-lines';
 import type { AppDeps } from '../app-deps';
-import { createPartLine, deletePartLine, episodeLines, getPartLine, updatePartLine } from '../services/part-lines';
+import { createPartLine, deletePartLine, getPartLine, updatePartLine } from '../services/part-lines';
+import { getBuildTotals, getEpisodeParts } from '../services/part-totals';
 import { createSupplier, listSuppliers, mergeSuppliers } from '../services/suppliers';
 import { exportLedgerCsv, importLedgerCsv, parseLedgerCsv } from '../services/ledger-csv';
 import { sql } from 'kysely';
@@ -28,15 +28,6 @@ const buildParams = z.object({ buildId: idParam });
 
 async function buildCurrency(deps: AppDeps, buildId: number): Promise<string> {
   return (await deps.db.selectFrom('builds').select('currency').where('id', '=', buildId).executeTakeFirstOrThrow()).currency;
-}
-
-async function episodeParts(deps: AppDeps, episodeId: number): Promise<EpisodeParts> {
-  const e = await deps.db.selectFrom('episodes').select('build_id').where('id', '=', episodeId).executeTakeFirstOrThrow();
-  const [items, totals] = await Promise.all([
-    episodeLines(deps.db, episodeId),
-    partTotals(deps.db, { episodeId }, await buildCurrency(deps, e.build_id)),
-  ]);
-  return { items, totals };
 }
 
 async function presentLine(deps: AppDeps, id: number) {
@@ -54,7 +45,7 @@ export const partLineRoutes = [
     params: episodeParams,
     resource: episodeResource,
     handler: async ({ deps, actor, params, resource }) => {
-      const parts = await episodeParts(deps, params.episodeId);
+      const parts = await getEpisodeParts(deps.db, params.episodeId);
       // Receipts are the build team's: readers do not even learn that one exists.
       const team = resource?.kind === 'episode' && actor?.builds.has(resource.buildId) === true;
       return team ? parts : { ...parts, items: parts.items.map((l) => ({ ...l, receipt: null })) };
@@ -111,52 +102,7 @@ export const partLineRoutes = [
     handler: async ({ deps, actor, params, query }): Promise<BuildTotals> => {
       // Lines of drafts stay with the build team; anyone else asking for them gets the published view.
       const includeUnpublished = query.scope === 'all' && actor?.builds.has(params.buildId) === true;
-      const scope = { buildId: params.buildId, includeUnpublished };
-      const b = await deps.db
-        .selectFrom('builds')
-        .select(['currency', 'budget_minor'])
-        .where('id', '=', params.buildId)
-        .executeTakeFirstOrThrow();
-      const [totals, breakdowns, onOrder] = await Promise.all([
-        partTotals(deps.db, scope, b.currency),
-        buildBreakdowns(deps.db, scope),
-        listLines(deps.db, scope, { status: 'on-order', limit: 20 }),
-      ]);
-      return {
-        totals,
-        budgetMinor: b.budget_minor,
-        netOfSalesMinor: totals.spent.grossMinor - totals.salesMinor,
-        bySystem: breakdowns.bySystem.map((s) => ({
-          key: s.key,
-          name: s.name,
-          budgetMinor: s.budget_minor,
-          spentMinor: s.spent,
-          committedMinor: s.committed,
-          plannedMinor: s.planned,
-        })),
-        bySupplier: breakdowns.bySupplier.map((s) => ({
-          supplierId: s.supplier_id,
-          name: s.name ?? 'No supplier',
-          spentMinor: s.spent,
-          lines: s.lines,
-        })),
-        byKind: breakdowns.byKind.map((k) => ({ kind: k.kind, spentMinor: k.spent, lines: k.lines })),
-        byEpisode: breakdowns.byEpisode.map((e) => ({
-          episodeId: e.episode_id,
-          number: e.number,
-          title: e.title,
-          spentMinor: e.spent,
-          cumulativeMinor: e.cumulative,
-        })),
-        onOrder: onOrder.rows.map((l) => ({
-          id: l.id,
-          description: l.description,
-          grossMinor: l.b_gross,
-          episode: { number: l.episode_number, slug: l.episode_slug },
-          openItemTitle: l.open_item_title,
-        })),
-        includesUnpublished: includeUnpublished,
-      };
+      return getBuildTotals(deps.db, params.buildId, includeUnpublished);
     },
   }),
   defineRoute({

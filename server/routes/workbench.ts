@@ -6,6 +6,8 @@ import { buildResource } from '../auth/resources';
 import { HttpError } from '../http/http-error';
 import { defineRoute } from '../http/registry';
 import { getWorkbench } from '../services/workbench';
+import { findEpisodeBySlug, getEpisodePage } from '../services/episode-page';
+import type { EpisodePage } from '../../src/shared/schemas/episode-page';
 import { sql } from 'kysely';
 
 const slug = z.string().regex(/^[a-z0-9-]{1,80}$/);
@@ -86,43 +88,25 @@ export const workbenchRoutes = [
     params: z.object({ buildId: idParam, episodeSlug: slug }),
     resource: buildResource,
     handler: async ({ deps, actor, params, res }) => {
-      let e = await deps.db
-        .selectFrom('episodes')
-        .select(['id', 'slug', 'status', 'deleted_at'])
-        .where('build_id', '=', params.buildId)
-        .where('slug', '=', params.episodeSlug)
-        .executeTakeFirst();
-      let moved = false;
-      if (!e) {
-        const former = await deps.db
-          .selectFrom('episode_slugs')
-          .select('episode_id')
-          .where('build_id', '=', params.buildId)
-          .where('slug', '=', params.episodeSlug)
-          .executeTakeFirst();
-        if (former)
-          e = await deps.db
-            .selectFrom('episodes')
-            .select(['id', 'slug', 'status', 'deleted_at'])
-            .where('id', '=', former.episode_id)
-            .executeTakeFirst();
-        moved = e !== undefined;
-      }
-      const build = await deps.db.selectFrom('builds').select(['visibility']).where('id', '=', params.buildId).executeTakeFirstOrThrow();
-      if (
-        !e ||
-        !canSee(actor, {
-          kind: 'episode',
-          id: e.id,
-          buildId: params.buildId,
-          visibility: build.visibility,
-          status: e.status,
-          deleted: e.deleted_at !== null,
-        })
-      )
-        throw new HttpError(404, 'not_found', 'Not found');
-      if (moved) res.status(301).setHeader('location', `/api/builds/${params.buildId}/episodes-by-slug/${encodeURIComponent(e.slug)}`);
-      return { episodeId: e.id, slug: e.slug, movedFrom: moved ? params.episodeSlug : null };
+      const e = await findEpisodeBySlug(deps.db, actor, params.buildId, params.episodeSlug);
+      if (!e) throw new HttpError(404, 'not_found', 'Not found');
+      if (e.moved) res.status(301).setHeader('location', `/api/builds/${params.buildId}/episodes-by-slug/${encodeURIComponent(e.slug)}`);
+      return { episodeId: e.id, slug: e.slug, movedFrom: e.moved ? params.episodeSlug : null };
+    },
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/builds/:buildId/episode-page/:episodeSlug',
+    summary: "The episode page in one response: address, reading, parts, the build's totals, figures and posts",
+    action: 'episode.read',
+    params: z.object({ buildId: idParam, episodeSlug: slug }),
+    resource: buildResource,
+    handler: async ({ deps, actor, params, res }): Promise<EpisodePage> => {
+      const e = await findEpisodeBySlug(deps.db, actor, params.buildId, params.episodeSlug);
+      const page = e ? await getEpisodePage(deps, actor, params.buildId, e, params.episodeSlug) : null;
+      if (!e || !page) throw new HttpError(404, 'not_found', 'Not found');
+      if (e.moved) res.status(301).setHeader('location', `/api/builds/${params.buildId}/episode-page/${encodeURIComponent(e.slug)}`);
+      return page;
     },
   }),
 ];

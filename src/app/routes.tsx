@@ -2,33 +2,9 @@ import type { QueryClient } from '@tanstack/react-query';
 import type { RouteObject } from 'react-router';
 import { latestEpisodesOptions } from '../features/episodes/api/get-latest-episodes';
 import type { ApiClient } from '../lib/api-client';
-import { AccountBuildsPage } from '../routes/account-builds';
-import { AccountSettingsPage } from '../routes/account-settings';
-import { adminAccountsLoader, AdminAccountsPage } from '../routes/admin-accounts';
-import { adminSuppliersLoader, AdminSuppliersPage } from '../routes/admin-suppliers';
-import { buildPageLoader, BuildPage } from '../routes/build-page';
-import { buildsDirectoryLoader, BuildsDirectoryPage } from '../routes/builds-directory';
-import { buildTeamLoader, BuildTeamPage } from '../routes/build-team';
-import { creatorPageLoader, CreatorPage } from '../routes/creator-page';
-import { episodePageLoader, EpisodePage } from '../routes/episode-page';
-import { followingLoader, FollowingPage } from '../routes/following';
 import { FrontPage, frontPageQuery } from '../routes/front-page';
-import { inboxLoader, InboxPage } from '../routes/inbox';
-import { moderationQueueLoader, ModerationQueuePage } from '../routes/moderation-queue';
-import { noticeSettingsLoader, NoticeSettingsPage } from '../routes/notice-settings';
-import { notificationsLoader, NotificationsPage } from '../routes/notifications';
-import { InvitationAcceptPage } from '../routes/invitation-accept';
 import { NotFound } from '../routes/not-found';
 import { primeSession, requireAccount } from '../routes/route-guards';
-import { searchPageLoader, SearchPage } from '../routes/search-page';
-import { SignInPage } from '../routes/sign-in';
-import { SignInLinkPage } from '../routes/sign-in-link';
-import { workbenchLoader, WorkbenchPage } from '../routes/workbench';
-import { WorkshopPage } from '../routes/workshop';
-import { workbenchBuildLoader, WorkbenchBuildPage } from '../routes/workbench-build';
-import { buildLedgerLoader, BuildLedgerPage } from '../routes/workbench-build-ledger';
-import { NewBuildPage } from '../routes/workbench-build-new';
-import { buildSettingsLoader, BuildSettingsPage } from '../routes/workbench-build-settings';
 import { RouteErrorBoundary } from './error-boundary';
 import { Shell, ShellLoading } from './shell';
 
@@ -74,36 +50,118 @@ export function createRoutes({ queryClient, api }: RouteDeps): RouteObject[] {
           },
           Component: FrontPage,
         },
-        { path: 'builds', id: 'builds-directory', loader: buildsDirectoryLoader(deps), Component: BuildsDirectoryPage },
-        { path: 'builds/:handle/:buildSlug', id: 'build-page', loader: buildPageLoader(deps), Component: BuildPage },
+        {
+          path: 'builds',
+          id: 'builds-directory',
+          lazy: async () => {
+            const m = await import('../routes/builds-directory');
+            return { loader: m.buildsDirectoryLoader(deps), Component: m.BuildsDirectoryPage };
+          },
+        },
+        {
+          path: 'builds/:handle/:buildSlug',
+          id: 'build-page',
+          lazy: async () => {
+            const m = await import('../routes/build-page');
+            return { loader: m.buildPageLoader(deps), Component: m.BuildPage };
+          },
+        },
         {
           path: 'builds/:handle/:buildSlug/episodes/:episodeSlug',
           id: 'episode-page',
-          loader: episodePageLoader(deps),
-          Component: EpisodePage,
+          lazy: async () => {
+            const m = await import('../routes/episode-page');
+            return { loader: m.episodePageLoader(deps), Component: m.EpisodePage };
+          },
         },
-        { path: 'creators/:handle', id: 'creator-page', loader: creatorPageLoader(deps), Component: CreatorPage },
-        { path: 'search', id: 'search', loader: searchPageLoader(deps), Component: SearchPage },
-        { path: 'sign-in', id: 'sign-in', Component: SignInPage },
-        { path: 'sign-in/link', id: 'sign-in-link', Component: SignInLinkPage },
-        { path: 'invitations/accept', id: 'invitation-accept', Component: InvitationAcceptPage },
-        { path: 'account', id: 'account-settings', loader: signedIn, Component: AccountSettingsPage },
-        { path: 'account/builds', id: 'account-builds', loader: signedIn, Component: AccountBuildsPage },
-        { path: 'account/builds/:buildId/team', id: 'build-team', loader: buildTeamLoader(deps), Component: BuildTeamPage },
-        { path: 'workbench', id: 'workbench', loader: workbenchLoader(deps), Component: WorkbenchPage },
-        { path: 'workbench/builds/new', id: 'workbench-build-new', loader: signedIn, Component: NewBuildPage },
-        { path: 'workbench/builds/:buildId', id: 'workbench-build', loader: workbenchBuildLoader(deps), Component: WorkbenchBuildPage },
+        {
+          path: 'creators/:handle',
+          id: 'creator-page',
+          lazy: async () => {
+            const m = await import('../routes/creator-page');
+            return { loader: m.creatorPageLoader(deps), Component: m.CreatorPage };
+          },
+        },
+        {
+          path: 'search',
+          id: 'search',
+          lazy: async () => {
+            const m = await import('../routes/search-page');
+            return { loader: m.searchPageLoader(deps), Component: m.SearchPage };
+          },
+        },
+        {
+          path: 'sign-in',
+          id: 'sign-in',
+          lazy: async () => ({ Component: (await import('../routes/sign-in')).SignInPage }),
+        },
+        {
+          path: 'sign-in/link',
+          id: 'sign-in-link',
+          lazy: async () => ({ Component: (await import('../routes/sign-in-link')).SignInLinkPage }),
+        },
+        {
+          path: 'invitations/accept',
+          id: 'invitation-accept',
+          lazy: async () => ({ Component: (await import('../routes/invitation-accept')).InvitationAcceptPage }),
+        },
+        {
+          path: 'account',
+          id: 'account-settings',
+          loader: signedIn,
+          lazy: async () => ({ Component: (await import('../routes/account-settings')).AccountSettingsPage }),
+        },
+        {
+          path: 'account/builds',
+          id: 'account-builds',
+          loader: signedIn,
+          lazy: async () => ({ Component: (await import('../routes/account-builds')).AccountBuildsPage }),
+        },
+        {
+          path: 'account/builds/:buildId/team',
+          id: 'build-team',
+          lazy: async () => {
+            const m = await import('../routes/build-team');
+            return { loader: m.buildTeamLoader(deps), Component: m.BuildTeamPage };
+          },
+        },
+        {
+          path: 'workbench',
+          id: 'workbench',
+          lazy: async () => {
+            const m = await import('../routes/workbench');
+            return { loader: m.workbenchLoader(deps), Component: m.WorkbenchPage };
+          },
+        },
+        {
+          path: 'workbench/builds/new',
+          id: 'workbench-build-new',
+          loader: signedIn,
+          lazy: async () => ({ Component: (await import('../routes/workbench-build-new')).NewBuildPage }),
+        },
+        {
+          path: 'workbench/builds/:buildId',
+          id: 'workbench-build',
+          lazy: async () => {
+            const m = await import('../routes/workbench-build');
+            return { loader: m.workbenchBuildLoader(deps), Component: m.WorkbenchBuildPage };
+          },
+        },
         {
           path: 'workbench/builds/:buildId/settings',
           id: 'workbench-build-settings',
-          loader: buildSettingsLoader(deps),
-          Component: BuildSettingsPage,
+          lazy: async () => {
+            const m = await import('../routes/workbench-build-settings');
+            return { loader: m.buildSettingsLoader(deps), Component: m.BuildSettingsPage };
+          },
         },
         {
           path: 'workbench/builds/:buildId/ledger',
           id: 'workbench-build-ledger',
-          loader: buildLedgerLoader(deps),
-          Component: BuildLedgerPage,
+          lazy: async () => {
+            const m = await import('../routes/workbench-build-ledger');
+            return { loader: m.buildLedgerLoader(deps), Component: m.BuildLedgerPage };
+          },
         },
         // A lazy module (the editor and Tiptap load only here); it reads its data through hooks, so the
         // loader only sends visitors to sign in.
@@ -113,14 +171,67 @@ export function createRoutes({ queryClient, api }: RouteDeps): RouteObject[] {
           loader: signedIn,
           lazy: () => import('../routes/episode-editor'),
         },
-        { path: 'inbox', id: 'inbox', loader: inboxLoader(deps), Component: InboxPage },
-        { path: 'following', id: 'following', loader: followingLoader(deps), Component: FollowingPage },
-        { path: 'notifications', id: 'notifications', loader: notificationsLoader(deps), Component: NotificationsPage },
-        { path: 'account/notices', id: 'notice-settings', loader: noticeSettingsLoader(deps), Component: NoticeSettingsPage },
-        { path: 'moderation', id: 'moderation-queue', loader: moderationQueueLoader(deps), Component: ModerationQueuePage },
-        { path: 'admin/accounts', id: 'admin-accounts', loader: adminAccountsLoader(deps), Component: AdminAccountsPage },
-        { path: 'workshop', id: 'workshop', Component: WorkshopPage },
-        { path: 'admin/suppliers', id: 'admin-suppliers', loader: adminSuppliersLoader(deps), Component: AdminSuppliersPage },
+        {
+          path: 'inbox',
+          id: 'inbox',
+          lazy: async () => {
+            const m = await import('../routes/inbox');
+            return { loader: m.inboxLoader(deps), Component: m.InboxPage };
+          },
+        },
+        {
+          path: 'following',
+          id: 'following',
+          lazy: async () => {
+            const m = await import('../routes/following');
+            return { loader: m.followingLoader(deps), Component: m.FollowingPage };
+          },
+        },
+        {
+          path: 'notifications',
+          id: 'notifications',
+          lazy: async () => {
+            const m = await import('../routes/notifications');
+            return { loader: m.notificationsLoader(deps), Component: m.NotificationsPage };
+          },
+        },
+        {
+          path: 'account/notices',
+          id: 'notice-settings',
+          lazy: async () => {
+            const m = await import('../routes/notice-settings');
+            return { loader: m.noticeSettingsLoader(deps), Component: m.NoticeSettingsPage };
+          },
+        },
+        {
+          path: 'moderation',
+          id: 'moderation-queue',
+          lazy: async () => {
+            const m = await import('../routes/moderation-queue');
+            return { loader: m.moderationQueueLoader(deps), Component: m.ModerationQueuePage };
+          },
+        },
+        {
+          path: 'admin/accounts',
+          id: 'admin-accounts',
+          lazy: async () => {
+            const m = await import('../routes/admin-accounts');
+            return { loader: m.adminAccountsLoader(deps), Component: m.AdminAccountsPage };
+          },
+        },
+        {
+          path: 'workshop',
+          id: 'workshop',
+          lazy: async () => ({ Component: (await import('../routes/workshop')).WorkshopPage }),
+        },
+        {
+          path: 'admin/suppliers',
+          id: 'admin-suppliers',
+          lazy: async () => {
+            const m = await import('../routes/admin-suppliers');
+            return { loader: m.adminSuppliersLoader(deps), Component: m.AdminSuppliersPage };
+          },
+        },
         { path: '*', id: NOT_FOUND_ROUTE_ID, Component: NotFound },
       ],
     },

@@ -19,6 +19,7 @@ import { groupByChapter } from '../shared/post-anchors';
 import { buildTotalsOptions, useBuildTotals } from '../features/parts/api/get-build-totals';
 import { episodePartsOptions, useEpisodeParts } from '../features/parts/api/get-episode-parts';
 import { PublicPartsTable } from '../features/parts/components/public-parts-table';
+import { fetchEpisodePage } from '../features/reading/api/get-episode-page';
 import { episodeReadingOptions, useEpisodeReading } from '../features/reading/api/get-episode-reading';
 import { chapterAt, ChapterRail } from '../features/reading/components/chapter-rail';
 import { ChapterSections } from '../features/reading/components/chapter-sections';
@@ -28,21 +29,24 @@ import { WriteUp } from '../features/reading/components/write-up';
 import { formatTime } from '../shared/chapters';
 import { momentAnchor, parseMomentAnchor, paths } from '../shared/paths';
 import type { EpisodeReading } from '../shared/schemas/reading';
-import { needData, resolveEpisodePage } from './reading-loaders';
+import { canonicalOr301, needData, resolveBuild } from './reading-loaders';
 import type { LoaderDeps } from './route-guards';
 
 export function episodePageLoader(deps: LoaderDeps) {
   return async ({ request, params }: { request: Request; params: Record<string, string | undefined> }) => {
-    const { episodeId, buildId } = await resolveEpisodePage(deps, request, params);
-    await Promise.all([
-      needData(deps.queryClient.ensureQueryData(episodeReadingOptions(deps.api, episodeId))),
-      // Sections beyond the write-up show their own error states; their failure must not take the page down.
-      deps.queryClient.ensureQueryData(episodePartsOptions(deps.api, episodeId)).catch(() => undefined),
-      deps.queryClient.ensureQueryData(buildTotalsOptions(deps.api, buildId)).catch(() => undefined),
-      deps.queryClient.ensureQueryData(episodeFiguresOptions(deps.api, episodeId)).catch(() => undefined),
-      deps.queryClient.ensureQueryData(episodePostsOptions(deps.api, episodeId)).catch(() => undefined),
-    ]);
-    return { episodeId, buildId };
+    const { queryClient, api } = deps;
+    const build = await resolveBuild(deps, request, params);
+    // One request for the page (it used to be five): each part goes into the cache entry its section reads.
+    const page = await needData(fetchEpisodePage(api, build.buildId, params.episodeSlug ?? '', request.signal));
+    canonicalOr301(request, `${build.path}/episodes/${encodeURIComponent(page.slug)}`);
+    const { episodeId } = page;
+    queryClient.setQueryData(episodeReadingOptions(api, episodeId).queryKey, page.reading);
+    // A section the server could not read stays out of the cache; the section then asks for it itself.
+    if (page.parts) queryClient.setQueryData(episodePartsOptions(api, episodeId).queryKey, page.parts);
+    if (page.totals) queryClient.setQueryData(buildTotalsOptions(api, build.buildId).queryKey, page.totals);
+    if (page.figures) queryClient.setQueryData(episodeFiguresOptions(api, episodeId).queryKey, page.figures);
+    if (page.posts) queryClient.setQueryData(episodePostsOptions(api, episodeId).queryKey, page.posts);
+    return { episodeId, buildId: build.buildId };
   };
 }
 

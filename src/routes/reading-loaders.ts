@@ -1,5 +1,5 @@
 import { redirect } from 'react-router';
-import { buildAddressOptions, episodeAddressOptions } from '../features/reading/api/get-addresses';
+import { buildAddressOptions } from '../features/reading/api/get-addresses';
 import { ApiError } from '../lib/api-client';
 import { routeError, type LoaderDeps } from './route-guards';
 
@@ -15,7 +15,7 @@ async function need<T>(pending: Promise<T>): Promise<T> {
 }
 
 /** Sends a former address on to the current one with 301, keeping the query and fragment-free. */
-function canonicalOr301(request: Request, canonical: string): void {
+export function canonicalOr301(request: Request, canonical: string): void {
   const url = new URL(request.url);
   if (decodeURIComponent(url.pathname) !== decodeURIComponent(canonical)) throw redirect(`${canonical}${url.search}`, 301);
 }
@@ -30,19 +30,6 @@ export async function resolveBuildPage(deps: LoaderDeps, request: Request, param
   const b = await resolveBuild(deps, request, params);
   canonicalOr301(request, b.path);
   return b;
-}
-
-/** The episode behind `/builds/:handle/:buildSlug/episodes/:episodeSlug`, its canonical path checked. */
-export async function resolveEpisodePage(
-  deps: LoaderDeps,
-  request: Request,
-  params: { handle?: string; buildSlug?: string; episodeSlug?: string },
-) {
-  const b = await resolveBuild(deps, request, params);
-  const e = await need(deps.queryClient.fetchQuery(episodeAddressOptions(deps.api, b.buildId, params.episodeSlug ?? '')));
-  const path = `${b.path}/episodes/${encodeURIComponent(e.slug)}`;
-  canonicalOr301(request, path);
-  return { buildId: b.buildId, episodeId: e.episodeId, path };
 }
 
 /** Waits for a page's main data the same way. */

@@ -89,6 +89,28 @@ describe('episode read in bench mode', () => {
     expect(JSON.parse(changed.body)).toMatchObject({ chapters: expect.arrayContaining([expect.objectContaining({ title: 'Renamed' })]) });
   });
 
+  it('answers the episode page in one response, each part as its own endpoint answers it', async () => {
+    const e = await app.deps.db.selectFrom('episodes').select(['build_id', 'slug']).where('id', '=', ids.large).executeTakeFirstOrThrow();
+    const res = await fetch(`${app.baseUrl}/api/builds/${e.build_id}/episode-page/${e.slug}`);
+    expect(res.status).toBe(200);
+    const page = (await res.json()) as Record<string, unknown>;
+    const get = async (path: string) => (await fetch(`${app.baseUrl}${path}`)).json();
+    expect(page.episodeId).toBe(ids.large);
+    expect(page.movedFrom).toBeNull();
+    expect(page.reading).toEqual(await get(`/api/episodes/${ids.large}/reading`));
+    expect(page.parts).toEqual(await get(`/api/episodes/${ids.large}/part-lines`));
+    expect(page.totals).toEqual(await get(`/api/builds/${e.build_id}/totals`));
+    expect(page.figures).toEqual(await get(`/api/episodes/${ids.large}/figures`));
+    expect(page.posts).toEqual(await get(`/api/episodes/${ids.large}/posts`));
+    expect((page.parts as { items: unknown[] }).items).toHaveLength(150);
+    // A former slug answers 301 to the current one's page.
+    await app.deps.db.insertInto('episode_slugs').values({ episode_id: ids.large, build_id: e.build_id, slug: 'old-name' }).execute();
+    const moved = await fetch(`${app.baseUrl}/api/builds/${e.build_id}/episode-page/old-name`, { redirect: 'manual' });
+    expect(moved.status).toBe(301);
+    expect(moved.headers.get('location')).toBe(`/api/builds/${e.build_id}/episode-page/${e.slug}`);
+    expect((await fetch(`${app.baseUrl}/api/builds/${e.build_id}/episode-page/no-such-episode`)).status).toBe(404);
+  });
+
   it('creates no session for an anonymous reader', async () => {
     const res = await fetch(`${app.baseUrl}/api/episodes/${ids.large}/reading`);
     expect(res.headers.get('set-cookie')).toBeNull();

@@ -203,6 +203,11 @@ export const routeMatrix: Record<string, MatrixRow> = {
     request: (w) => ({ path: `/api/builds/${w.ids.buildA}/episodes-by-slug/${w.slugs.draft}` }),
     expect: draftTeam(200),
   },
+  // The episode page in one response follows the episode it names: a draft's only for its build team.
+  'GET /builds/:buildId/episode-page/:episodeSlug': {
+    request: (w) => ({ path: `/api/builds/${w.ids.buildA}/episode-page/${w.slugs.draft}` }),
+    expect: draftTeam(200),
+  },
   // Reading: the public side is open to all; a draft's page exists only for its build team.
   'GET /builds': { request: () => ({ path: '/api/builds' }), expect: all(200) },
   'GET /builds/:buildId/overview': { request: (w) => ({ path: `/api/builds/${w.ids.buildA}/overview` }), expect: all(200) },

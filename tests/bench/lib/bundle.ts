@@ -21,7 +21,7 @@ export interface BundleFigures {
   episode_initial_files: string[];
 }
 
-const EPISODE_ROUTE = 'src/routes/episode-page.tsx';
+export const EPISODE_ROUTE = 'src/routes/episode-page.tsx';
 const EDITOR_ROUTE = 'src/routes/episode-editor.tsx';
 
 /** The chunk keys reachable from `key` through static imports. */
