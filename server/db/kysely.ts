@@ -22,7 +22,7 @@ export interface DbHandle {
   destroy(): Promise<void>;
 }
 
-/** Opens a pool and a Kysely instance over it; errors on idle clients are logged, not fatal. */
+/** Opens a pool and a Kysely instance over it; connection errors are logged, never fatal. */
 export function createDb(connectionString: string, opts: { max?: number; onError?: (err: Error) => void } = {}): DbHandle {
   const pool = new pg.Pool({
     connectionString,
@@ -33,6 +33,11 @@ export function createDb(connectionString: string, opts: { max?: number; onError
     query_timeout: 30_000,
   });
   pool.on('error', (err) => opts.onError?.(err));
+  // pg-pool listens for errors only on idle clients. A client checked out between two statements
+  // (inside a transaction) that loses its server — PostgreSQL restarting, 57P01 — would emit an
+  // 'error' nobody hears and crash the process (found by the fault suite). Every client gets a
+  // listener of its own; the failed statement or the next one on that client answers 503.
+  pool.on('connect', (client) => client.on('error', (err) => opts.onError?.(err)));
   const db = new Kysely<Database>({ dialect: new PostgresDialect({ pool }) });
   return { db, pool, destroy: () => db.destroy() };
 }

@@ -115,37 +115,42 @@ describe('CSRF', () => {
 });
 
 describe('sessions across restarts and processes', () => {
-  it('keep working after the in-process app restarts on the same database, and on a second server process', async () => {
-    const first = await startTestApp({ keepDatabase: true, inProcessOnly: true });
-    let second: TestApp | undefined;
-    try {
-      const user = await createUser(first.deps.db, { email: 'durable@example.test' });
-      const client = await signedInClient(first, 'durable@example.test');
-      const cookie = client.cookie;
-      expect(cookie).toBeDefined();
-      await first.stop();
-
-      second = await startTestApp({ databaseUrl: first.database.url, inProcessOnly: true });
-      const again = withCookie(second.baseUrl, cookie);
-      const res = await again.get('/api/session');
-      expect(res.status).toBe(200);
-      expect(sessionResponse.parse(res.body).account?.id).toBe(user.id);
-
-      const proc = await spawnServerProcess(second);
+  // A spawned server compiles with tsx on start: slow on a loaded machine (see server-process.ts).
+  it(
+    'keep working after the in-process app restarts on the same database, and on a second server process',
+    { timeout: 60_000 },
+    async () => {
+      const first = await startTestApp({ keepDatabase: true, inProcessOnly: true });
+      let second: TestApp | undefined;
       try {
-        const there = withCookie(proc.baseUrl, cookie);
-        const remote = await there.get('/api/session');
-        expect(remote.status).toBe(200);
-        expect(sessionResponse.parse(remote.body).account?.id).toBe(user.id);
-        // Both servers still serve it, from the one table.
-        expect(sessionResponse.parse((await again.get('/api/session')).body).account?.id).toBe(user.id);
+        const user = await createUser(first.deps.db, { email: 'durable@example.test' });
+        const client = await signedInClient(first, 'durable@example.test');
+        const cookie = client.cookie;
+        expect(cookie).toBeDefined();
+        await first.stop();
+
+        second = await startTestApp({ databaseUrl: first.database.url, inProcessOnly: true });
+        const again = withCookie(second.baseUrl, cookie);
+        const res = await again.get('/api/session');
+        expect(res.status).toBe(200);
+        expect(sessionResponse.parse(res.body).account?.id).toBe(user.id);
+
+        const proc = await spawnServerProcess(second);
+        try {
+          const there = withCookie(proc.baseUrl, cookie);
+          const remote = await there.get('/api/session');
+          expect(remote.status).toBe(200);
+          expect(sessionResponse.parse(remote.body).account?.id).toBe(user.id);
+          // Both servers still serve it, from the one table.
+          expect(sessionResponse.parse((await again.get('/api/session')).body).account?.id).toBe(user.id);
+        } finally {
+          const code = await proc.terminate();
+          expect(code, proc.stderr()).toBe(0);
+        }
       } finally {
-        const code = await proc.terminate();
-        expect(code, proc.stderr()).toBe(0);
+        if (second) await second.stop();
+        else await first.database.drop();
       }
-    } finally {
-      if (second) await second.stop();
-      else await first.database.drop();
-    }
-  });
+    },
+  );
 });
