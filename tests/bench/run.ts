@@ -86,6 +86,7 @@ async function main() {
         log(`baseline-${mode} …`);
         const r = await measure({ url: b.url, connections: CONNECTIONS, seconds: SECONDS });
         cases.push({ name: `baseline-${mode}`, ...pick(r), ratio_to_baseline: null, queries_per_request: mode === 'http' ? 0 : 1 });
+        log(`  ${JSON.stringify(cases.at(-1))}`);
       } finally {
         b.child.kill('SIGTERM');
       }
@@ -124,11 +125,19 @@ async function main() {
       const qpr = await queriesPerRequest(base, send);
       const r = await measure({ url: `${base}${c.path}`, connections: CONNECTIONS, seconds: SECONDS, method: c.method, headers: c.headers, body: c.body, expectStatus: c.status });
       cases.push({ name: c.name, ...pick(r), ratio_to_baseline: round(r.rps / baseline.rps), queries_per_request: qpr });
+      log(`  ${JSON.stringify(cases.at(-1))}`);
     }
 
     log('aggregates against the same SQL through pg …');
-    aggregates.push(await timeAggregate('ledger-totals', base, databaseUrl, `/api/builds/${ids.build_id}/totals`));
-    if (routes) aggregates.push(await timeAggregate('sponsor-summary', base, databaseUrl, `/api/sponsors/${LARGE.largestSponsor}/summary`));
+    const aggregate = async (name: string, p: string) => {
+      try {
+        aggregates.push(await timeAggregate(name, base, databaseUrl, p));
+      } catch (err) {
+        aggregates.push({ name, ms: null, raw_sql_ms: null, ratio: null, note: `failed: ${(err as Error).message}` });
+      }
+    };
+    await aggregate('ledger-totals', `/api/builds/${ids.build_id}/totals`);
+    if (routes) await aggregate('sponsor-summary', `/api/sponsors/${LARGE.largestSponsor}/summary`);
     else aggregates.push({ name: 'sponsor-summary', ms: null, raw_sql_ms: null, ratio: null, note: 'not available' });
   } finally {
     await server.stop();
