@@ -4,7 +4,7 @@
 // the warm-up (target: within 20 %). Prints its figures, writes .bench/load.json, and exits 1 when
 // a 500 was answered or the RSS drifted beyond 20 %.
 // Environment: LOAD_CONNECTIONS (200), LOAD_SECONDS (60), BENCH_SCALE (1).
-import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import autocannon from 'autocannon';
@@ -20,6 +20,7 @@ const SESSION_SECRET = 'bench-session-secret-not-for-real-use-0123456789';
 
 /** Resident set size of a process in MB (Linux). */
 function rssMb(pid: number): number {
+  if (!existsSync(`/proc/${pid}/status`)) throw new Error('the server process is gone (it exited under load; see its log above)');
   const line = readFileSync(`/proc/${pid}/status`, 'utf8')
     .split('\n')
     .find((l) => l.startsWith('VmRSS:'));
