@@ -11,9 +11,11 @@ async function buildCurrency(db: Db, buildId: number): Promise<string> {
 /** An episode's parts list with its totals (receipts included: the caller strips them for readers). */
 export async function getEpisodeParts(db: Db, episodeId: number): Promise<EpisodeParts> {
   const e = await db.selectFrom('episodes').select('build_id').where('id', '=', episodeId).executeTakeFirstOrThrow();
+  // No `await` inside the list: a rejection of the first query while the second waited would go
+  // unhandled and end the process (seen under load when the pool timed out).
   const [items, totals, disclosure] = await Promise.all([
     episodeLines(db, episodeId),
-    partTotals(db, { episodeId }, await buildCurrency(db, e.build_id)),
+    buildCurrency(db, e.build_id).then((currency) => partTotals(db, { episodeId }, currency)),
     episodeDisclosure(db, episodeId),
   ]);
   return { items, totals, disclosure };

@@ -33,8 +33,7 @@ export async function search(db: Db, q: string, page: number): Promise<SearchRes
     hits as (
       select 'episode' as kind, e.id, e.title, b.slug as build_slug, b.title as build_title, u.handle, u.display_name,
              e.number, e.slug as episode_slug, e.published_at,
-             ts_rank_cd(e.search_vector, query.tsq) as rank,
-             concat_ws(' ', e.summary, e.chapter_titles, e.write_up_text) as body
+             ts_rank_cd(e.search_vector, query.tsq) as rank
         from episodes e
         join builds b on b.id = e.build_id
         join users u on u.id = b.owner_id
@@ -45,8 +44,7 @@ export async function search(db: Db, q: string, page: number): Promise<SearchRes
       union all
       select 'part', pl.id, pl.description, b.slug, b.title, u.handle, u.display_name,
              e.number, e.slug, e.published_at,
-             ts_rank_cd(pl.search_vector, query.tsq) * 0.5,
-             concat_ws(' ', pl.description, pl.part_number)
+             ts_rank_cd(pl.search_vector, query.tsq) * 0.5
         from part_lines pl
         join episodes e on e.id = pl.episode_id
         join builds b on b.id = e.build_id
@@ -58,8 +56,7 @@ export async function search(db: Db, q: string, page: number): Promise<SearchRes
       union all
       select 'build', b.id, b.title, b.slug, b.title, u.handle, u.display_name,
              null, null, null,
-             ts_rank_cd(b.search_vector, query.tsq),
-             concat_ws(' ', b.vehicle_year, b.vehicle_make, b.vehicle_model, '—', b.summary)
+             ts_rank_cd(b.search_vector, query.tsq)
         from builds b
         join users u on u.id = b.owner_id
         cross join query
@@ -74,8 +71,15 @@ export async function search(db: Db, q: string, page: number): Promise<SearchRes
     )
     select page.kind, page.id, page.title, page.build_slug, page.build_title, page.handle, page.display_name,
            page.number, page.episode_slug, page.published_at, page.total::int as total,
-           ts_headline('english', page.body, query.tsq, ${HEADLINE_OPTIONS}) as snippet
+           ts_headline('english', body.text, query.tsq, ${HEADLINE_OPTIONS}) as snippet
       from page cross join query
+      -- The text to quote is read for the page's rows only, not for every hit (write-ups are long).
+      cross join lateral (
+        select case page.kind
+          when 'episode' then (select concat_ws(' ', e.summary, e.chapter_titles, e.write_up_text) from episodes e where e.id = page.id)
+          when 'part' then (select concat_ws(' ', pl.description, pl.part_number) from part_lines pl where pl.id = page.id)
+          else (select concat_ws(' ', b.vehicle_year, b.vehicle_make, b.vehicle_model, '—', b.summary) from builds b where b.id = page.id)
+        end as text) body
      order by page.rank desc, page.published_at desc nulls last, page.kind, page.id desc`.execute(db);
   // Past the last page there are no rows to carry the count: ask the first page for it (rare), so the
   // page can say how many there are and link back.

@@ -73,6 +73,8 @@ export function createPageRenderer(distDir: string, publicUrl: string): RequestH
       .replace('<!--app-head-->', result.head)
       .replace('<!--app-html-->', () => result.html)
       .replace('<!--app-data-->', () => `<script type="application/json" id="${HYDRATION_SCRIPT_ID}">${result.data}</script>`);
+    // A page whose data was refused as overloaded or unavailable asks the client to come back later.
+    if (result.status === 503) res.setHeader('retry-after', '5');
     res.status(result.status).setHeader('cache-control', 'no-store').type('html').send(html);
   };
 }

@@ -4,6 +4,7 @@ import { latestEpisodesOptions } from '../features/episodes/api/get-latest-episo
 import type { ApiClient } from '../lib/api-client';
 import { FrontPage, frontPageQuery } from '../routes/front-page';
 import { NotFound } from '../routes/not-found';
+import { needData } from '../routes/reading-loaders';
 import { primeSession, requireAccount } from '../routes/route-guards';
 import { RouteErrorBoundary } from './error-boundary';
 import { Shell, ShellLoading } from './shell';
@@ -45,7 +46,7 @@ export function createRoutes({ queryClient, api }: RouteDeps): RouteObject[] {
           id: 'front-page',
           loader: async ({ request }) => {
             const q = frontPageQuery(new URL(request.url).searchParams);
-            await queryClient.ensureQueryData(latestEpisodesOptions(api, q));
+            await needData(queryClient.ensureQueryData(latestEpisodesOptions(api, q)));
             return null;
           },
           Component: FrontPage,

@@ -1,4 +1,4 @@
-import { redirect } from 'react-router';
+import { data, redirect } from 'react-router';
 import { buildAddressOptions } from '../features/reading/api/get-addresses';
 import { ApiError } from '../lib/api-client';
 import { routeError, type LoaderDeps } from './route-guards';
@@ -10,6 +10,8 @@ async function need<T>(pending: Promise<T>): Promise<T> {
   } catch (err) {
     if (err instanceof ApiError && (err.status === 401 || err.status === 403 || err.status === 404)) routeError(err.status);
     if (err instanceof ApiError && err.status === 400) routeError(404);
+    // The API is overloaded or a service is down: the page answers 503 too (with Retry-After), not 500.
+    if (err instanceof ApiError && err.status === 503) throw data(null, { status: 503 });
     throw err;
   }
 }

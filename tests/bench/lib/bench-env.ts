@@ -60,14 +60,14 @@ export interface BenchServer {
 }
 
 /** Builds the client if stale, starts the fakes, and spawns the production server over `databaseUrl`. */
-export async function startBenchServer(databaseUrl: string, env: Record<string, string> = {}): Promise<BenchServer> {
+export async function startBenchServer(databaseUrl: string, env: Record<string, string> = {}, nodeArgs: string[] = []): Promise<BenchServer> {
   ensureBuilt(root, 'dist', log);
   const dir = await mkdtemp(path.join(os.tmpdir(), 'rr-bench-'));
   const s3 = await startS3Fake({ port: 0, directory: path.join(dir, 's3'), buckets: ['rivet-reel-bench'] });
   const smtp = await startSmtpFake({ smtpPort: 0, httpPort: 0 });
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
-  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+  const child = spawn(process.execPath, [...nodeArgs, '--import', 'tsx', 'server/index.ts'], {
     cwd: root,
     env: {
       PATH: process.env.PATH,

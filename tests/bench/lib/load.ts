@@ -56,9 +56,21 @@ export async function queryLog(baseUrl: string, since?: number): Promise<{ queri
   return (await res.json()) as { queries: number; log: Array<{ seq: number; text: string; values: unknown[] }> };
 }
 
+/** Waits until the server has sent no query for half a second (an earlier load's stragglers are done). */
+export async function quiet(baseUrl: string): Promise<void> {
+  let last = (await queryLog(baseUrl)).queries;
+  for (let i = 0; i < 60; i += 1) {
+    await new Promise((r) => setTimeout(r, 500));
+    const now = (await queryLog(baseUrl)).queries;
+    if (now === last) return;
+    last = now;
+  }
+}
+
 /** SQL queries per request: `n` sequential requests, the count read before and after. */
 export async function queriesPerRequest(baseUrl: string, send: () => Promise<Response>, n = 5): Promise<number> {
   await (await send()).arrayBuffer();
+  await quiet(baseUrl);
   const before = (await queryLog(baseUrl)).queries;
   for (let i = 0; i < n; i += 1) await (await send()).arrayBuffer();
   const after = (await queryLog(baseUrl)).queries;
