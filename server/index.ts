@@ -3,6 +3,7 @@ import { createApp } from './app';
 import { ConfigError, loadConfig } from './config';
 import { createDeps } from './deps';
 import { createLogger } from './logger';
+import { answerClientErrorsInJson } from './http/client-error';
 
 process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED ??= 'true';
 
@@ -25,6 +26,7 @@ async function main(): Promise<void> {
     logger.info({ url: `http://${config.HOST}:${config.PORT}` }, 'Rivet & Reel is listening');
   });
   server.keepAliveTimeout = 5_000;
+  answerClientErrorsInJson(server);
 
   let stopping = false;
   const shutdown = (signal: string) => {

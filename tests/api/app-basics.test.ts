@@ -42,6 +42,14 @@ describe('errors', () => {
     expect(JSON.stringify(body)).not.toMatch(/at .*\.js:\d+/);
   });
 
+  it('answers an address too long for the HTTP parser with 431 JSON, not a bare status line', async () => {
+    // Node's default header limit is 16 KiB; 20,000 characters of query string is past it.
+    const res = await fetch(`${app.baseUrl}/api/search?q=${'a'.repeat(20_000)}`);
+    expect(res.status).toBe(431);
+    expect(res.headers.get('content-type')).toMatch(/application\/json/);
+    expect(((await res.json()) as { error: { code: string } }).error.code).toBe('headers_too_large');
+  });
+
   it('names the bad field of an invalid query', async () => {
     const res = await fetch(`${app.baseUrl}/api/episodes?perPage=5000`);
     expect(res.status).toBe(400);

@@ -19,11 +19,12 @@ afterAll(async () => {
 });
 
 async function schema(): Promise<string[]> {
-  const r = await sql<{
-    c: string;
-  }>`select table_name || '.' || column_name as c from information_schema.columns where table_schema = 'public' order by 1`.execute(
-    handle.db,
-  );
+  // Columns and indexes (with their definitions), so a migration that only adds an index counts too.
+  const r = await sql<{ c: string }>`
+    select table_name || '.' || column_name as c from information_schema.columns where table_schema = 'public'
+    union all
+    select 'index ' || indexname || ': ' || indexdef from pg_indexes where schemaname = 'public'
+    order by 1`.execute(handle.db);
   return r.rows.map((t) => t.c);
 }
 
