@@ -105,7 +105,10 @@ describe('followers', () => {
     await inbox.keyboard.press('Tab');
     await inbox.keyboard.press('Enter');
     await first.getByText('A flat spanner on the piston flats').waitFor();
+    // Wait for the state change to be saved (the select's own option says "Answered" at once).
+    const saved = inbox.waitForResponse((r) => r.url().includes('/api/posts/') && r.request().method() !== 'GET' && r.ok());
     await first.getByLabel('State').selectOption('answered');
+    await saved;
     await expect.poll(() => first.getByText('Answered', { exact: true }).count()).toBeGreaterThan(0);
 
     await visit(follower, `${app.baseUrl}${EPISODE}`);
