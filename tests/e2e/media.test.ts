@@ -139,7 +139,8 @@ describe('pictures in an episode', () => {
       { name: 'one.jpg', mimeType: 'image/jpeg', buffer: await photo(60) },
       { name: 'two.jpg', mimeType: 'image/jpeg', buffer: await photo(120) },
     ]);
-    await page.getByLabel('Describe gallery picture 2').waitFor({ timeout: 15_000 });
+    // Two uploads and their image sizes on a loaded 2-core machine can take a while; 30 s is generous.
+    await page.getByLabel('Describe gallery picture 2').waitFor({ timeout: 30_000 });
     const before = (await client.get(`/api/episodes/${id}/pictures`)).body.gallery.map((m: { id: number }) => m.id);
     expect(before).toHaveLength(2);
     await page.getByRole('button', { name: 'Move down picture 1' }).click();
