@@ -67,6 +67,44 @@ async function invitationTarget(trx: AppDeps['db'], inv: Pick<Row, 'kind' | 'bui
   return { kind: 'build-editor', title: b.title };
 }
 
+/**
+ * Replaces any pending invitation of this address to the same build or organisation with a new one,
+ * and queues its e-mail in the same transaction. Both kinds of invitation go through here.
+ */
+async function issueInvitation(
+  deps: AppDeps,
+  trx: AppDeps['db'],
+  target: { kind: 'build-editor'; build_id: number } | { kind: 'sponsor-member'; sponsor_id: number },
+  email: string,
+  inviterId: number,
+  title: string,
+  inviterName: string,
+): Promise<Invitation> {
+  const pending = trx
+    .updateTable('invitations')
+    .set({ revoked_at: sql<Date>`now()` })
+    .where('email', '=', email)
+    .where('accepted_at', 'is', null)
+    .where('revoked_at', 'is', null);
+  await (
+    'build_id' in target ? pending.where('build_id', '=', target.build_id) : pending.where('sponsor_id', '=', target.sponsor_id)
+  ).execute();
+  const { token, hash } = newToken();
+  const row = await trx
+    .insertInto('invitations')
+    .values({
+      ...target,
+      email,
+      token_hash: hash,
+      invited_by: inviterId,
+      expires_at: sql<Date>`now() + make_interval(days => ${INVITATION_DAYS})`,
+    })
+    .returningAll()
+    .executeTakeFirstOrThrow();
+  await sendInvitationEmail(deps, trx, email, token, { kind: target.kind, title }, inviterName);
+  return presentInvitation(row);
+}
+
 /** Invites an address to edit a build; a pending invitation to the same address is replaced. */
 export async function inviteEditor(deps: AppDeps, inviterId: number, buildId: number, email: string): Promise<Invitation> {
   return deps.db.transaction().execute(async (trx) => {
@@ -83,29 +121,7 @@ export async function inviteEditor(deps: AppDeps, inviterId: number, buildId: nu
       throw new HttpError(409, 'already_member', 'That address already belongs to someone on this build', {
         email: ['already on the build team'],
       });
-    await trx
-      .updateTable('invitations')
-      .set({ revoked_at: sql<Date>`now()` })
-      .where('build_id', '=', buildId)
-      .where('email', '=', email)
-      .where('accepted_at', 'is', null)
-      .where('revoked_at', 'is', null)
-      .execute();
-    const { token, hash } = newToken();
-    const row = await trx
-      .insertInto('invitations')
-      .values({
-        kind: 'build-editor',
-        build_id: buildId,
-        email,
-        token_hash: hash,
-        invited_by: inviterId,
-        expires_at: sql<Date>`now() + make_interval(days => ${INVITATION_DAYS})`,
-      })
-      .returningAll()
-      .executeTakeFirstOrThrow();
-    await sendInvitationEmail(deps, trx, email, token, { kind: 'build-editor', title: build.title }, inviter.display_name);
-    return presentInvitation(row);
+    return issueInvitation(deps, trx, { kind: 'build-editor', build_id: buildId }, email, inviterId, build.title, inviter.display_name);
   });
 }
 
@@ -236,29 +252,15 @@ export async function inviteSponsorMember(deps: AppDeps, inviterId: number, spon
       throw new HttpError(409, 'already_member', 'That address already belongs to a member of this organisation', {
         email: ['already a member'],
       });
-    await trx
-      .updateTable('invitations')
-      .set({ revoked_at: sql<Date>`now()` })
-      .where('sponsor_id', '=', sponsorId)
-      .where('email', '=', email)
-      .where('accepted_at', 'is', null)
-      .where('revoked_at', 'is', null)
-      .execute();
-    const { token, hash } = newToken();
-    const row = await trx
-      .insertInto('invitations')
-      .values({
-        kind: 'sponsor-member',
-        sponsor_id: sponsorId,
-        email,
-        token_hash: hash,
-        invited_by: inviterId,
-        expires_at: sql<Date>`now() + make_interval(days => ${INVITATION_DAYS})`,
-      })
-      .returningAll()
-      .executeTakeFirstOrThrow();
-    await sendInvitationEmail(deps, trx, email, token, { kind: 'sponsor-member', title: sponsor.name }, inviter.display_name);
-    return presentInvitation(row);
+    return issueInvitation(
+      deps,
+      trx,
+      { kind: 'sponsor-member', sponsor_id: sponsorId },
+      email,
+      inviterId,
+      sponsor.name,
+      inviter.display_name,
+    );
   });
 }
 
