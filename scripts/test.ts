@@ -18,6 +18,8 @@ interface StepResult {
   failed: number;
   skipped: number;
   seconds: number;
+  /** Names and first message lines of failed tests, repeated in the summary (CI often shows only the tail). */
+  failures?: string[];
 }
 
 function run(cmd: string, args: string[], env: NodeJS.ProcessEnv): Promise<number> {
@@ -43,6 +45,22 @@ interface VitestJson {
   numTodoTests: number;
   numFailedTestSuites: number;
   success: boolean;
+  testResults?: {
+    name: string;
+    message?: string;
+    assertionResults?: { fullName: string; status: string; failureMessages?: string[] }[];
+  }[];
+}
+
+function failuresOf(r: VitestJson): string[] {
+  const out: string[] = [];
+  for (const file of r.testResults ?? []) {
+    const rel = path.relative(root, file.name);
+    const failed = (file.assertionResults ?? []).filter((a) => a.status === 'failed');
+    for (const a of failed) out.push(`${rel} › ${a.fullName}: ${(a.failureMessages?.[0] ?? '').split('\n')[0]!.slice(0, 300)}`);
+    if (!failed.length && file.message) out.push(`${rel}: ${file.message.split('\n')[0]!.slice(0, 300)}`);
+  }
+  return out;
 }
 
 /** Runs one Vitest project and reads its counts from the JSON reporter. */
@@ -63,7 +81,14 @@ async function vitest(project: string, env: NodeJS.ProcessEnv): Promise<StepResu
   // files") fails the run with none at all: count those, so a step can never pass silently.
   let failed = r.numFailedTests + (r.numFailedTestSuites > 0 && r.numFailedTests === 0 ? r.numFailedTestSuites : 0);
   if (code !== 0 && failed === 0) failed = 1;
-  return { name: `${project} tests`, passed: r.numPassedTests, failed, skipped: r.numPendingTests + r.numTodoTests, seconds };
+  return {
+    name: `${project} tests`,
+    passed: r.numPassedTests,
+    failed,
+    skipped: r.numPendingTests + r.numTodoTests,
+    seconds,
+    failures: failuresOf(r),
+  };
 }
 
 async function main() {
@@ -90,10 +115,16 @@ async function main() {
       FORCE_COLOR: process.env.CI ? '0' : process.env.FORCE_COLOR,
     };
     const results: StepResult[] = [];
-    results.push(await check('typecheck', bin('tsc'), ['--noEmit'], env));
-    results.push(await check('lint', bin('eslint'), ['.', '--max-warnings=0'], env));
     // `faults` starts and restarts a PostgreSQL cluster of its own, so it runs alone, between the others.
-    for (const project of ['unit', 'api', 'two-processes', 'faults', 'e2e']) results.push(await vitest(project, env));
+    // `npm test -- faults e2e` runs only the named projects (no typecheck or lint): for a developer
+    // chasing one suite. CI and the README's command run everything.
+    const all = ['unit', 'api', 'two-processes', 'faults', 'e2e'];
+    const only = process.argv.slice(2).filter((a) => all.includes(a));
+    if (!only.length) {
+      results.push(await check('typecheck', bin('tsc'), ['--noEmit'], env));
+      results.push(await check('lint', bin('eslint'), ['.', '--max-warnings=0'], env));
+    }
+    for (const project of only.length ? only : all) results.push(await vitest(project, env));
 
     const total = results.reduce((a, r) => ({ passed: a.passed + r.passed, failed: a.failed + r.failed, skipped: a.skipped + r.skipped }), {
       passed: 0,
@@ -105,6 +136,11 @@ async function main() {
       console.log(
         `  ${r.failed ? 'FAIL' : 'ok  '}  ${r.name.padEnd(12)} ${String(r.passed).padStart(4)} passed  ${String(r.failed).padStart(3)} failed  ${String(r.skipped).padStart(3)} skipped  ${r.seconds.toFixed(1)} s`,
       );
+    }
+    const failures = results.flatMap((r) => r.failures ?? []);
+    if (failures.length) {
+      console.log('\nFailed');
+      for (const f of failures) console.log(`  ${f}`);
     }
     console.log(`${total.passed} passed, ${total.failed} failed${total.skipped ? `, ${total.skipped} skipped` : ''}`);
     exitCode = total.failed === 0 ? 0 : 1;

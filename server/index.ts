@@ -3,7 +3,7 @@ import { createApp } from './app';
 import { ConfigError, loadConfig } from './config';
 import { createDeps } from './deps';
 import { createLogger } from './logger';
-import { answerClientErrorsInJson } from './http/client-error';
+import { closeGracefully, prepareHttpServer } from './http/server-settings';
 
 process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED ??= 'true';
 
@@ -25,26 +25,30 @@ async function main(): Promise<void> {
   const server: Server = app.listen(config.PORT, config.HOST, () => {
     logger.info({ url: `http://${config.HOST}:${config.PORT}` }, 'Rivet & Reel is listening');
   });
-  server.keepAliveTimeout = 5_000;
-  answerClientErrorsInJson(server);
+  prepareHttpServer(server);
 
   let stopping = false;
   const shutdown = (signal: string) => {
     if (stopping) return;
     stopping = true;
     logger.info({ signal }, 'shutting down: finishing in-flight requests');
-    // Stop accepting; idle keep-alive sockets close now, busy ones after their response.
-    server.close(async () => {
-      try {
-        await deps.close();
-        logger.info('shut down cleanly');
-        process.exit(0);
-      } catch (err) {
+    // Stop accepting; idle keep-alive connections close now, busy ones once their response is sent.
+    closeGracefully(server).then(
+      async () => {
+        try {
+          await deps.close();
+          logger.info('shut down cleanly');
+          process.exit(0);
+        } catch (err) {
+          logger.error({ err }, 'error during shutdown');
+          process.exit(1);
+        }
+      },
+      (err: unknown) => {
         logger.error({ err }, 'error during shutdown');
         process.exit(1);
-      }
-    });
-    server.closeIdleConnections();
+      },
+    );
     setTimeout(() => {
       logger.warn('forcing shutdown after 20 s');
       process.exit(1);

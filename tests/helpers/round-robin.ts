@@ -45,6 +45,8 @@ export async function startRoundRobin(): Promise<RoundRobin> {
     });
     req.pipe(upstream);
   });
+  server.keepAliveTimeout = 65_000; // longer than the clients' idle timeout, as server/http/server-settings.ts explains
+  server.headersTimeout = 66_000;
   server.listen(0, '127.0.0.1');
   await new Promise<void>((resolve) => server.once('listening', resolve));
   const { port } = server.address() as AddressInfo;

@@ -14,7 +14,7 @@ import { QUEUE_SCHEMA } from '../../server/jobs/queue';
 import { startRoundRobin, type RoundRobin } from './round-robin';
 import { spawnServerProcess, type ServerProcess } from './server-process';
 import { createTestDatabase, existingTestDatabase, type TestDatabase } from './test-db';
-import { answerClientErrorsInJson } from '../../server/http/client-error';
+import { prepareHttpServer } from '../../server/http/server-settings';
 
 /**
  * `RR_TWO_PROCESSES=1` (the `two-processes` Vitest project): `baseUrl` is a round-robin front over
@@ -58,7 +58,7 @@ export async function startTestApp(opts: TestAppOptions = {}): Promise<TestApp> 
   const smtp = await startSmtpFake({ smtpPort: 0, httpPort: 0 });
   // Listen first so PUBLIC_URL (OAuth callback, e-mailed links) can name the real port.
   const server = http.createServer();
-  answerClientErrorsInJson(server);
+  prepareHttpServer(server);
   server.listen(0, '127.0.0.1');
   await new Promise<void>((resolve) => server.once('listening', resolve));
   const { port } = server.address() as AddressInfo;
