@@ -14,7 +14,10 @@ export { SESSION_COOKIE };
 export function sessionMiddleware(pool: pg.Pool, config: Config) {
   const PgStore = connectPgSimple(session);
   return session({
-    store: new PgStore({ pool, tableName: 'sessions', createTableIfMissing: false, pruneSessionInterval: false }),
+    // No touch: the cookie's expiry is fixed when the session starts (not rolling), so moving the
+    // row's expiry on every request bought nothing and cost a write per signed-in request — and a
+    // touch that failed (database restarting) reached the error handler after the response.
+    store: new PgStore({ pool, tableName: 'sessions', createTableIfMissing: false, pruneSessionInterval: false, disableTouch: true }),
     name: SESSION_COOKIE,
     secret: config.SESSION_SECRET,
     resave: false,

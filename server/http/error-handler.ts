@@ -49,6 +49,15 @@ export function toHttpError(err: unknown): HttpError {
 
 /** The last middleware: logs server faults and answers with `{ error: { code, message, fields? } }`. */
 export const errorHandler: ErrorRequestHandler = (err, req, res, next) => {
+  // An error reported after the response was complete (express-session saves the session as the
+  // response ends and reports a failed save afterwards): the client has its answer, so log it and
+  // leave the connection alone. Express's own handler would destroy the socket, and a client that
+  // had already sent its next request on that kept-alive connection would see it fail.
+  if (res.writableEnded) {
+    req.log?.error({ err }, 'error after the response was sent');
+    return;
+  }
+  // Part of a response went out: only closing the connection can tell the client it is incomplete.
   if (res.headersSent) return next(err);
   const httpError = toHttpError(err);
   if (httpError.status >= 500) req.log?.error({ err }, 'request failed');
