@@ -64,14 +64,14 @@ function failuresOf(r: VitestJson): string[] {
 }
 
 /** Runs one Vitest project and reads its counts from the JSON reporter. */
-async function vitest(project: string, env: NodeJS.ProcessEnv): Promise<StepResult> {
+async function vitest(project: string, env: NodeJS.ProcessEnv, filters: string[] = []): Promise<StepResult> {
   const started = Date.now();
   const out = path.join(resultsDir, `${project}.json`);
   rmSync(out, { force: true });
   log(`${project} tests…`);
   const code = await run(
     bin('vitest'),
-    ['run', '--project', project, '--reporter=default', '--reporter=json', `--outputFile.json=${out}`],
+    ['run', '--project', project, '--reporter=default', '--reporter=json', `--outputFile.json=${out}`, ...filters],
     env,
   );
   const seconds = (Date.now() - started) / 1000;
@@ -116,15 +116,18 @@ async function main() {
     };
     const results: StepResult[] = [];
     // `faults` starts and restarts a PostgreSQL cluster of its own, so it runs alone, between the others.
-    // `npm test -- faults e2e` runs only the named projects (no typecheck or lint): for a developer
-    // chasing one suite. CI and the README's command run everything.
+    // `npm test -- faults e2e` runs only the named projects (no typecheck or lint), and any other
+    // argument is a file filter for Vitest (`npm test -- e2e media`): for a developer chasing one
+    // suite. CI and the README's command run everything.
     const all = ['unit', 'api', 'two-processes', 'faults', 'e2e'];
-    const only = process.argv.slice(2).filter((a) => all.includes(a));
+    const args = process.argv.slice(2);
+    const only = args.filter((a) => all.includes(a));
+    const filters = args.filter((a) => !all.includes(a));
     if (!only.length) {
       results.push(await check('typecheck', bin('tsc'), ['--noEmit'], env));
       results.push(await check('lint', bin('eslint'), ['.', '--max-warnings=0'], env));
     }
-    for (const project of only.length ? only : all) results.push(await vitest(project, env));
+    for (const project of only.length ? only : all) results.push(await vitest(project, env, filters));
 
     const total = results.reduce((a, r) => ({ passed: a.passed + r.passed, failed: a.failed + r.failed, skipped: a.skipped + r.skipped }), {
       passed: 0,

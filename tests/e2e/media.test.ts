@@ -140,7 +140,18 @@ describe('pictures in an episode', () => {
       { name: 'two.jpg', mimeType: 'image/jpeg', buffer: await photo(120) },
     ]);
     // Two uploads and their image sizes on a loaded 2-core machine can take a while; 30 s is generous.
-    await page.getByLabel('Describe gallery picture 2').waitFor({ timeout: 30_000 });
+    try {
+      await page.getByLabel('Describe gallery picture 2').waitFor({ timeout: 30_000 });
+    } catch (err) {
+      // Rare on CI and not reproduced locally: say what the server and the page had at that moment.
+      const stored = (await client.get(`/api/episodes/${id}/pictures`)).body as { gallery?: { id: number; status: string }[] };
+      const text = (await page.locator('main').innerText()).replace(/\s+/g, ' ');
+      const panel = text.slice(Math.max(0, text.indexOf('Cover and gallery')), text.indexOf('Cover and gallery') + 600);
+      throw new Error(
+        `gallery picture 2 did not appear: the server has ${JSON.stringify(stored.gallery?.map((m) => [m.id, m.status]))}; ` +
+          `console errors ${JSON.stringify(tracked.consoleErrors)}; the panel reads "${panel}" (${(err as Error).message.split('\n')[0]})`,
+      );
+    }
     const before = (await client.get(`/api/episodes/${id}/pictures`)).body.gallery.map((m: { id: number }) => m.id);
     expect(before).toHaveLength(2);
     await page.getByRole('button', { name: 'Move down picture 1' }).click();

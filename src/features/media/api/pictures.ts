@@ -1,7 +1,14 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { ApiClient } from '../../../lib/api-client';
 import { useApi } from '../../../lib/api-context';
-import { buildCover, buildPhotosResponse, episodePictures, mediaItem, type EpisodePicturesUpdate } from '../../../shared/schemas/media';
+import {
+  buildCover,
+  buildPhotosResponse,
+  episodePictures,
+  mediaItem,
+  type EpisodePictures,
+  type EpisodePicturesUpdate,
+} from '../../../shared/schemas/media';
 
 /** Query keys of the media feature; every variable a fetcher uses is in its key. */
 export const mediaKeys = {
@@ -23,10 +30,12 @@ export const episodePicturesOptions = (api: ApiClient, episodeId: number) =>
   queryOptions({
     queryKey: mediaKeys.episodePictures(episodeId),
     queryFn: ({ signal }) => api.get(`/api/episodes/${episodeId}/pictures`, episodePictures, signal),
-    // While a photo's sizes are being made, look again shortly so "processing" turns into the picture.
-    refetchInterval: (q) =>
-      [q.state.data?.cover, ...(q.state.data?.gallery ?? [])].some((m) => m?.status === 'processing') ? 2_000 : false,
+    refetchInterval: (q) => whileProcessing(q.state.data),
   });
+
+/** While a photo's sizes are being made, look again shortly so "processing" turns into the picture. */
+const whileProcessing = (data: EpisodePictures | undefined) =>
+  [data?.cover, ...(data?.gallery ?? [])].some((m) => m?.status === 'processing') ? 2_000 : false;
 
 export const buildCoverOptions = (api: ApiClient, buildId: number) =>
   queryOptions({
@@ -39,7 +48,15 @@ export function useBuildPhotos(buildId: number, page: number, enabled = true) {
 }
 
 export function useEpisodePictures(episodeId: number) {
-  return useQuery(episodePicturesOptions(useApi(), episodeId));
+  const queryClient = useQueryClient();
+  const options = episodePicturesOptions(useApi(), episodeId);
+  return useQuery({
+    ...options,
+    // No polling while a change is being saved: an answer read before the save landed would put
+    // the older list back, and the next change would be built on it.
+    refetchInterval: (q) =>
+      queryClient.isMutating({ mutationKey: mediaKeys.episodePictures(episodeId) }) ? false : whileProcessing(q.state.data),
+  });
 }
 
 export function useBuildCover(buildId: number) {
@@ -50,6 +67,12 @@ export function useSetEpisodePictures(episodeId: number) {
   const api = useApi();
   const queryClient = useQueryClient();
   return useMutation({
+    // One save at a time, in order: each body builds on the one before (several uploads finishing
+    // together), and two PUTs racing could let the older list arrive last and drop a picture.
+    scope: { id: `episode-pictures-${episodeId}` },
+    mutationKey: mediaKeys.episodePictures(episodeId),
+    // A read already on its way may have been answered before this save: drop it.
+    onMutate: () => queryClient.cancelQueries({ queryKey: mediaKeys.episodePictures(episodeId) }),
     mutationFn: (body: EpisodePicturesUpdate) => api.put(`/api/episodes/${episodeId}/pictures`, body, episodePictures),
     onSuccess: (data) => queryClient.setQueryData(mediaKeys.episodePictures(episodeId), data),
   });
