@@ -7,6 +7,7 @@ import type { Db } from './db/kysely';
 import type { RateLimits } from './http/rate-limit';
 import type { JobQueue } from './jobs/queue';
 import type { Outbox } from './services/outbox';
+import type { ReadingCache } from './services/reading-cache';
 
 /** Everything the app talks to, injected so tests can build the app in-process. */
 export interface AppDeps {
@@ -19,5 +20,7 @@ export interface AppDeps {
   mailer: Mailer;
   queue: JobQueue;
   outbox: Outbox;
+  /** The episode read, per build content revision (server/services/reading-cache.ts). */
+  readingCache: ReadingCache;
   logger: Logger;
 }

@@ -8,6 +8,7 @@ import { createRateLimits } from './http/rate-limit';
 import { registerJobs } from './jobs';
 import { JobQueue } from './jobs/queue';
 import { Outbox, type OutboxOptions } from './services/outbox';
+import { ReadingCache } from './services/reading-cache';
 
 export interface RunningDeps extends AppDeps {
   /** Closes everything in reverse order of opening. */
@@ -37,6 +38,7 @@ export function createDeps(config: Config, logger: Logger, overrides: { outbox?:
     mailer,
     queue,
     outbox,
+    readingCache: new ReadingCache(),
     logger,
   };
   registerJobs(deps);

@@ -7,7 +7,16 @@ export type { Actor } from './actor';
 /** What an action is about, loaded by the route before the policy decides. */
 export type Resource =
   | { kind: 'build'; id: number; visibility: BuildVisibility; deleted: boolean; pendingTransferTo: number | null }
-  | { kind: 'episode'; id: number; buildId: number; visibility: BuildVisibility; status: EpisodeStatus; deleted: boolean }
+  | {
+      kind: 'episode';
+      id: number;
+      buildId: number;
+      visibility: BuildVisibility;
+      status: EpisodeStatus;
+      deleted: boolean;
+      /** The build's `content_revision` when it was loaded: the episode read's cache key. */
+      contentRevision?: number;
+    }
   | { kind: 'account'; userId: number }
   /** A sponsor organisation as its summary sees it: only its members know it is there (404 to others). */
   | { kind: 'sponsor'; id: number }

@@ -1,3 +1,5 @@
+import type { Db } from '../db/kysely';
+import { compiledById } from '../db/prepared';
 import type { AppDeps } from '../app-deps';
 import type { Resource } from './policy';
 
@@ -27,13 +29,17 @@ export async function invitationBuildResource(deps: AppDeps, params: { invitatio
 }
 
 /** The episode named by `:episodeId` with what the policy needs of its build. */
-export async function episodeResource(deps: AppDeps, params: { episodeId: number }): Promise<Resource | null> {
-  const e = await deps.db
+// Looked up on every episode request: compiled once, run as a prepared statement.
+const episodeRow = compiledById((db: Db, id: number) =>
+  db
     .selectFrom('episodes as e')
     .innerJoin('builds as b', 'b.id', 'e.build_id')
-    .select(['e.id', 'e.build_id', 'e.status', 'e.deleted_at', 'b.visibility', 'b.deleted_at as build_deleted_at'])
-    .where('e.id', '=', params.episodeId)
-    .executeTakeFirst();
+    .select(['e.id', 'e.build_id', 'e.status', 'e.deleted_at', 'b.visibility', 'b.deleted_at as build_deleted_at', 'b.content_revision'])
+    .where('e.id', '=', id),
+);
+
+export async function episodeResource(deps: AppDeps, params: { episodeId: number }): Promise<Resource | null> {
+  const e = (await episodeRow(deps.db, params.episodeId)).rows[0];
   return e
     ? {
         kind: 'episode',
@@ -42,6 +48,7 @@ export async function episodeResource(deps: AppDeps, params: { episodeId: number
         visibility: e.visibility,
         status: e.status,
         deleted: e.deleted_at !== null || e.build_deleted_at !== null,
+        contentRevision: e.content_revision,
       }
     : null;
 }

@@ -1,5 +1,5 @@
 import connectPgSimple from 'connect-pg-simple';
-import type { Request } from 'express';
+import type { Request, RequestHandler } from 'express';
 import session from 'express-session';
 import type pg from 'pg';
 import type { Config } from '../config';
@@ -45,4 +45,19 @@ export function signInSession(req: Request, userId: number): Promise<void> {
 /** Ends the session and its row. */
 export function endSession(req: Request): Promise<void> {
   return new Promise((resolve, reject) => req.session.destroy((err) => (err ? reject(err) : resolve())));
+}
+
+/**
+ * The session middleware, skipped for a visitor's read: a GET or HEAD without our cookie can have no
+ * session, and starting one in memory (a random id, a hash of it at the end) only to throw it away
+ * was a tenth of an anonymous episode read's CPU. `starts` names the reads that do start one (the
+ * CSRF token). Everything downstream already treats a missing session as a visitor.
+ */
+export function sessionsWhereNeeded(sessions: RequestHandler, starts: (req: Request) => boolean): RequestHandler {
+  const marker = `${SESSION_COOKIE}=`;
+  return (req, res, next) => {
+    const safe = req.method === 'GET' || req.method === 'HEAD';
+    if (safe && !req.headers.cookie?.includes(marker) && !starts(req)) return next();
+    return sessions(req, res, next);
+  };
 }

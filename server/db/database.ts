@@ -113,6 +113,8 @@ export interface BuildsTable {
   video_link_pattern: Generated<string>;
   pending_transfer_to: number | null;
   cover_media_id: Generated<number | null>;
+  /** Goes up with any change a reader of the build's episodes would see (migration 2026-12-03_1130). */
+  content_revision: Generated<number>;
   deleted_at: NullableTimestamp;
   created_at: Generated<Date>;
   updated_at: Generated<Date>;

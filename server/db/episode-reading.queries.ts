@@ -1,8 +1,9 @@
-import { sql, type CompiledQuery, type Selectable } from 'kysely';
+import { sql, type Selectable } from 'kysely';
 import { jsonArrayFrom, jsonObjectFrom } from 'kysely/helpers/postgres';
 import type { MediaTable } from './database';
 import type { Db } from './kysely';
 import { disclosureFactsSql } from './disclosure.queries';
+import { compiledById } from './prepared';
 import { isPublishedEpisode } from './reading.queries';
 
 type MediaRow = Selectable<MediaTable>;
@@ -132,18 +133,13 @@ export function selectEpisodeReading(db: Db, episodeId: number) {
     .where('e.id', '=', episodeId);
 }
 
-type ReadingRow = Awaited<ReturnType<ReturnType<typeof selectEpisodeReading>['executeTakeFirstOrThrow']>>;
 
-// The query is built and compiled once, with a stand-in id, and run with the real one: building and
-// compiling this many subqueries on every read cost more CPU than PostgreSQL spends answering it.
-const STAND_IN_ID = -7_357_001;
-let compiled: CompiledQuery<ReadingRow> | undefined;
+// Built and compiled once, then run as a prepared statement (see `compiledById`).
+const reading = compiledById(selectEpisodeReading);
 
 /** The episode page's row; see `selectEpisodeReading`. */
 export async function findEpisodeReading(db: Db, episodeId: number) {
-  compiled ??= selectEpisodeReading(db, STAND_IN_ID).compile();
-  const query = { ...compiled, parameters: compiled.parameters.map((p) => (p === STAND_IN_ID ? episodeId : p)) };
-  const row = (await db.executeQuery<ReadingRow>(query)).rows[0];
+  const row = (await reading(db, episodeId)).rows[0];
   if (!row) return null;
   return {
     ...row,

@@ -1,6 +1,7 @@
 import { Kysely, PostgresDialect } from 'kysely';
 import pg from 'pg';
 import type { Database } from './database';
+import { nameRegisteredStatements } from './prepared';
 
 // int8 (bigint, count(*)) → number, refusing silently lossy values; numeric stays a string
 // so decimal quantities and rates are parsed deliberately, never as floats by accident.
@@ -37,7 +38,10 @@ export function createDb(connectionString: string, opts: { max?: number; onError
   // (inside a transaction) that loses its server — PostgreSQL restarting, 57P01 — would emit an
   // 'error' nobody hears and crash the process (found by the fault suite). Every client gets a
   // listener of its own; the failed statement or the next one on that client answers 503.
-  pool.on('connect', (client) => client.on('error', (err) => opts.onError?.(err)));
+  pool.on('connect', (client) => {
+    client.on('error', (err) => opts.onError?.(err));
+    nameRegisteredStatements(client);
+  });
   const db = new Kysely<Database>({ dialect: new PostgresDialect({ pool }) });
   return { db, pool, destroy: () => db.destroy() };
 }

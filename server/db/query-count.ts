@@ -34,7 +34,10 @@ export class QueryCounter {
 
   private record(first: unknown, second: unknown): void {
     this.count += 1;
-    const cfg = typeof first === 'string' ? { text: first, values: Array.isArray(second) ? second : [] } : (first as { text?: string; values?: unknown[] });
+    const cfg =
+      typeof first === 'string'
+        ? { text: first, values: Array.isArray(second) ? second : [] }
+        : (first as { text?: string; values?: unknown[] });
     this.recent.push({ seq: this.count, text: cfg?.text ?? '', values: cfg?.values ?? [] });
     if (this.recent.length > KEEP) this.recent.shift();
   }

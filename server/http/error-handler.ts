@@ -60,7 +60,8 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, next) => {
   // Part of a response went out: only closing the connection can tell the client it is incomplete.
   if (res.headersSent) return next(err);
   const httpError = toHttpError(err);
-  if (httpError.status >= 500) req.log?.error({ err }, 'request failed');
+  // The method and path (never the query: it can carry tokens), for when the request log is off.
+  if (httpError.status >= 500) req.log?.error({ err, method: req.method, path: req.path }, 'request failed');
   if (httpError.status === 503) res.setHeader('retry-after', '5');
   for (const [k, v] of Object.entries(httpError.headers ?? {})) res.setHeader(k, v);
   res.status(httpError.status).json({

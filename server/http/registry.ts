@@ -63,9 +63,21 @@ export function actorOf(req: Request): Actor {
  * params → resource (404) → policy (401/403/404) → query and body (400) → rate limit (429) → handler.
  */
 export function buildApiRouter(routes: readonly RouteSpec[], deps: AppDeps): Router {
+  // Routes are grouped by their first path segment, one sub-router each (registry order kept
+  // within a group): a request is matched against its group's few routes instead of trying every
+  // route's pattern in turn, which was a noticeable share of a cheap read's CPU (profile, 105 routes).
   const router = Router();
+  const groups = new Map<string, Router>();
   for (const spec of routes) {
-    router[spec.method](spec.path, async (req, res) => {
+    const prefix = /^\/[^/:]+/.exec(spec.path)?.[0] ?? '';
+    let group = groups.get(prefix);
+    if (!group) {
+      group = Router();
+      groups.set(prefix, group);
+      if (prefix) router.use(prefix, group);
+      else router.use(group);
+    }
+    group[spec.method](spec.path.slice(prefix.length) || '/', async (req, res) => {
       const actor = actorOf(req);
       const params = spec.params ? parse(spec.params, req.params, 'params') : undefined;
       let resource: Resource | undefined;

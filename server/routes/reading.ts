@@ -7,6 +7,7 @@ import { defineRoute } from '../http/registry';
 import { listBuildDirectory } from '../db/reading.queries';
 import { getBuildOverview, getCreatorPage, getEpisodeReading, presentBuildCard } from '../services/reading';
 import { search } from '../services/search';
+import { sendCachedBody } from '../services/reading-cache';
 
 const orNotFound = <T>(value: T | null): T => {
   if (value === null) throw new HttpError(404, 'not_found', 'Not found');
@@ -42,7 +43,18 @@ export const readingRoutes = [
     action: 'episode.read',
     params: z.object({ episodeId: idParam }),
     resource: episodeResource,
-    handler: async ({ deps, params }) => orNotFound(await getEpisodeReading(deps.db, params.episodeId)),
+    // Served from the cache while the build's content revision is unchanged (no second query, no
+    // serialising, gzip made once); the response is the same for everyone the policy lets in.
+    handler: async ({ deps, params, req, res, resource }) => {
+      const revision = resource?.kind === 'episode' ? resource.contentRevision : undefined;
+      const body =
+        revision === undefined
+          ? null
+          : await deps.readingCache.get(params.episodeId, revision, () => getEpisodeReading(deps.db, params.episodeId));
+      if (revision !== undefined && !body) throw new HttpError(404, 'not_found', 'Not found');
+      if (body) return sendCachedBody(req, res, body);
+      return orNotFound(await getEpisodeReading(deps.db, params.episodeId));
+    },
   }),
   defineRoute({
     method: 'get',

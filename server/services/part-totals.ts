@@ -24,11 +24,7 @@ export async function getEpisodeParts(db: Db, episodeId: number): Promise<Episod
 /** A build's spend: totals, by system against budgets, supplier, kind and episode, and what is on order. */
 export async function getBuildTotals(db: Db, buildId: number, includeUnpublished: boolean): Promise<BuildTotals> {
   const scope = { buildId, includeUnpublished };
-  const b = await db
-    .selectFrom('builds')
-    .select(['currency', 'budget_minor'])
-    .where('id', '=', buildId)
-    .executeTakeFirstOrThrow();
+  const b = await db.selectFrom('builds').select(['currency', 'budget_minor']).where('id', '=', buildId).executeTakeFirstOrThrow();
   const [totals, breakdowns, onOrder] = await Promise.all([
     partTotals(db, scope, b.currency),
     buildBreakdowns(db, scope),
