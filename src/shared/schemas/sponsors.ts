@@ -80,7 +80,7 @@ export const sponsorSummaryLine = z.object({
   /** The chapter the line's moment falls in, if any. */
   chapter: z.object({ title: z.string(), startSeconds: z.number().int() }).nullable(),
   atSeconds: z.number().int().nullable(),
-  /** Link to the moment in the episode (the episode page with `?t=`), or the episode. */
+  /** Link to the moment in the episode (the episode page with `#at-<seconds>`), or the episode. */
   momentPath: z.string(),
   description: z.string(),
   quantity: z.string(),
