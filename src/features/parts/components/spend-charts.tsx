@@ -28,7 +28,8 @@ export function SpendCharts({ totals }: { totals: BuildTotals }) {
           </Suspense>
         ) : null}
       </div>
-      <div className="overflow-x-auto">
+      {/* Scrolls sideways on a phone: focusable so a keyboard can scroll it (axe "scrollable-region-focusable"). */}
+      <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Spend by system against its budget">
         <table className="w-full min-w-[30rem] border-collapse text-[15px]">
           <caption className="label-condensed pb-2 text-left">Spend by system against its budget</caption>
           <thead>
@@ -72,7 +73,7 @@ export function SpendCharts({ totals }: { totals: BuildTotals }) {
         </table>
       </div>
       {totals.byEpisode.length ? (
-        <div className="overflow-x-auto">
+        <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Spend by episode, and to date">
           <table className="w-full min-w-[24rem] border-collapse text-[15px]">
             <caption className="label-condensed pb-2 text-left">Spend by episode, and to date</caption>
             <thead>
