@@ -1,4 +1,5 @@
 import { Form, useSearchParams } from 'react-router';
+import { QueryState } from '../components/ui/query-state';
 import { Button, ButtonLink } from '../components/ui/button';
 import { PageHeading } from '../components/ui/page-heading';
 import { StateMessage } from '../components/ui/state-message';
@@ -77,20 +78,15 @@ export function AdminAccountsPage() {
               <Pages query={query} total={data.total} />
             </>
           )
-        ) : error ? (
-          <StateMessage
-            kind="error"
-            title="The accounts could not be loaded."
-            action={
-              <Button onClick={() => void refetch()} disabled={isFetching}>
-                {isFetching ? 'Trying again…' : 'Try again'}
-              </Button>
-            }
-          >
-            <p>{error.message}</p>
-          </StateMessage>
         ) : (
-          <StateMessage kind="loading" title="Loading accounts…" />
+          <QueryState
+            showMessage
+            error={error}
+            isFetching={isFetching}
+            refetch={refetch}
+            errorTitle="The accounts could not be loaded."
+            loadingTitle="Loading accounts…"
+          />
         )}
       </section>
     </>

@@ -1,5 +1,5 @@
 import { Link } from 'react-router';
-import { Button } from '../components/ui/button';
+import { QueryState } from '../components/ui/query-state';
 import { PageHeading } from '../components/ui/page-heading';
 import { StateMessage } from '../components/ui/state-message';
 import { adminPaths } from '../features/admin/paths';
@@ -59,20 +59,15 @@ export function AdminSponsorsPage() {
               ))}
             </ul>
           )
-        ) : error ? (
-          <StateMessage
-            kind="error"
-            title="The organisations could not be loaded."
-            action={
-              <Button onClick={() => void refetch()} disabled={isFetching}>
-                {isFetching ? 'Trying again…' : 'Try again'}
-              </Button>
-            }
-          >
-            <p>{error.message}</p>
-          </StateMessage>
         ) : (
-          <StateMessage kind="loading" title="Loading the organisations…" />
+          <QueryState
+            showMessage
+            error={error}
+            isFetching={isFetching}
+            refetch={refetch}
+            errorTitle="The organisations could not be loaded."
+            loadingTitle="Loading the organisations…"
+          />
         )}
       </section>
       <section aria-labelledby="new-sponsor-heading" className="mt-12 max-w-3xl">

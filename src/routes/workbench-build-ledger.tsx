@@ -1,6 +1,7 @@
 import { useCallback } from 'react';
+import { QueryState } from '../components/ui/query-state';
 import { useSearchParams } from 'react-router';
-import { Button, buttonClass } from '../components/ui/button';
+import { buttonClass } from '../components/ui/button';
 import { PageHeading } from '../components/ui/page-heading';
 import { Pagination } from '../components/ui/pagination';
 import { StateMessage } from '../components/ui/state-message';
@@ -155,18 +156,14 @@ function LedgerLines({
 }
 
 function Loading({ error, what, retry, busy }: { error: Error | null; what: string; retry: () => void; busy: boolean }) {
-  if (!error) return <StateMessage kind="loading" title={`Loading… ${what.toLowerCase()}`} />;
   return (
-    <StateMessage
-      kind="error"
-      title={`${what} could not be loaded.`}
-      action={
-        <Button onClick={retry} disabled={busy}>
-          {busy ? 'Trying again…' : 'Try again'}
-        </Button>
-      }
-    >
-      <p>{error.message}</p>
-    </StateMessage>
+    <QueryState
+      showMessage
+      error={error}
+      isFetching={busy}
+      refetch={retry}
+      errorTitle={`${what} could not be loaded.`}
+      loadingTitle={`Loading… ${what.toLowerCase()}`}
+    />
   );
 }

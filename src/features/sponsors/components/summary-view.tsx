@@ -1,4 +1,5 @@
 import { lazy, Suspense, useEffect, useState } from 'react';
+import { QueryState } from '../../../components/ui/query-state';
 import { Form, Link } from 'react-router';
 import { Button, ButtonLink, buttonClass } from '../../../components/ui/button';
 import { Pagination } from '../../../components/ui/pagination';
@@ -238,20 +239,15 @@ export function SummaryBody({
   showBuild: boolean;
 }) {
   if (!data) {
-    return error ? (
-      <StateMessage
-        kind="error"
-        title="The summary could not be loaded."
-        action={
-          <Button onClick={retry} disabled={busy}>
-            {busy ? 'Trying again…' : 'Try again'}
-          </Button>
-        }
-      >
-        <p>{error.message}</p>
-      </StateMessage>
-    ) : (
-      <StateMessage kind="loading" title="Loading the summary…" />
+    return (
+      <QueryState
+        showMessage
+        error={error}
+        isFetching={busy}
+        refetch={retry}
+        errorTitle="The summary could not be loaded."
+        loadingTitle="Loading the summary…"
+      />
     );
   }
   const filtered = Boolean(query.from || query.to || query.build || query.kind);
