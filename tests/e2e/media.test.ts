@@ -158,6 +158,9 @@ describe('pictures in an episode', () => {
     await expect
       .poll(async () => (await client.get(`/api/episodes/${id}/pictures`)).body.gallery.map((m: { id: number }) => m.id))
       .toEqual([before[1], before[0]]);
+    // The server has the new order; wait until the page has it too (the move buttons come back when
+    // its save has settled), or the rows re-render under the typing and the description is lost.
+    await expect.poll(() => page.getByRole('button', { name: 'Move down picture 1' }).isEnabled()).toBe(true);
     for (const [n, text] of [
       [1, 'New floor panel offered up'],
       [2, 'Old floor cut out along the seam'],
