@@ -132,10 +132,20 @@ export function decimalToMinor(text: string, currency: string): number | null {
   return Number.isSafeInteger(n) ? n : null;
 }
 
+// Building an Intl.NumberFormat costs far more than formatting with one (a server-rendered episode
+// page formats hundreds of amounts): one formatter per currency, made on first use.
+const formatters = new Map<string, { exp: number; format: Intl.NumberFormat }>();
+
 /** For display only (never for arithmetic): 1234 EUR → "€12.34", in a fixed locale so server and browser agree. */
 export function formatMinor(minor: number, currency: string): string {
-  const exp = currencyExponent(currency) ?? 2;
-  return new Intl.NumberFormat('en-GB', { style: 'currency', currency, minimumFractionDigits: exp, maximumFractionDigits: exp }).format(
-    minor / 10 ** exp,
-  );
+  let f = formatters.get(currency);
+  if (!f) {
+    const exp = currencyExponent(currency) ?? 2;
+    f = {
+      exp,
+      format: new Intl.NumberFormat('en-GB', { style: 'currency', currency, minimumFractionDigits: exp, maximumFractionDigits: exp }),
+    };
+    formatters.set(currency, f);
+  }
+  return f.format.format(minor / 10 ** f.exp);
 }
