@@ -7,7 +7,9 @@ import type { Db } from './db/kysely';
 import type { RateLimits } from './http/rate-limit';
 import type { JobQueue } from './jobs/queue';
 import type { Outbox } from './services/outbox';
+import type { PageCache } from './ssr/page-cache';
 import type { ReadingCache } from './services/reading-cache';
+import type { SingleFlight } from './services/single-flight';
 
 /** Everything the app talks to, injected so tests can build the app in-process. */
 export interface AppDeps {
@@ -20,7 +22,11 @@ export interface AppDeps {
   mailer: Mailer;
   queue: JobQueue;
   outbox: Outbox;
-  /** The episode read, per build content revision (server/services/reading-cache.ts). */
+  /** Public reads of a build's content, per build content revision (server/services/reading-cache.ts). */
   readingCache: ReadingCache;
+  /** Reads in progress that a caller asking the same may join (search; server/services/single-flight.ts). */
+  sharedReads: SingleFlight;
+  /** Server-rendered pages for visitors without a session, checked against their API answers (server/ssr/page-cache.ts). */
+  pageCache: PageCache;
   logger: Logger;
 }

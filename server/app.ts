@@ -104,7 +104,7 @@ export function createApp(deps: AppDeps): Express {
   // Hashed assets never change under their name: cache them for a year.
   app.use('/assets', express.static(path.join(client, 'assets'), { immutable: true, maxAge: '365d', index: false, fallthrough: false }));
   app.use(express.static(client, { index: false, maxAge: config.NODE_ENV === 'production' ? '1h' : 0 }));
-  app.get('/{*splat}', createPageRenderer(config.DIST_DIR, config.PUBLIC_URL));
+  app.get('/{*splat}', createPageRenderer(config.DIST_DIR, config.PUBLIC_URL, deps.pageCache));
 
   app.use(errorHandler);
   return app;

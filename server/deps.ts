@@ -9,6 +9,8 @@ import { registerJobs } from './jobs';
 import { JobQueue } from './jobs/queue';
 import { Outbox, type OutboxOptions } from './services/outbox';
 import { ReadingCache } from './services/reading-cache';
+import { SingleFlight } from './services/single-flight';
+import { PageCache } from './ssr/page-cache';
 
 export interface RunningDeps extends AppDeps {
   /** Closes everything in reverse order of opening. */
@@ -39,6 +41,8 @@ export function createDeps(config: Config, logger: Logger, overrides: { outbox?:
     queue,
     outbox,
     readingCache: new ReadingCache(),
+    pageCache: new PageCache(),
+    sharedReads: new SingleFlight(),
     logger,
   };
   registerJobs(deps);

@@ -7,7 +7,7 @@ import { Providers } from './app/providers';
 import { createRoutes, NOT_FOUND_ROUTE_ID } from './app/routes';
 import { sessionOptions } from './features/accounts/api/get-session';
 import { createApiClient } from './lib/api-client';
-import { SESSION_COOKIE } from './shared/http';
+import { hasSessionCookie } from './shared/http';
 import { createQueryClient } from './lib/query-client';
 
 export interface RenderInput {
@@ -18,15 +18,17 @@ export interface RenderInput {
   cookie?: string;
   /** The site's public address (PUBLIC_URL), for canonical and share links. */
   publicUrl: string;
+  /** The fetch the loaders' API client uses (the server's page cache records what a page read). */
+  fetch?: typeof fetch;
 }
 
 export type RenderResult =
   { type: 'response'; response: Response } | { type: 'page'; status: number; head: string; html: string; data: string };
 
 /** Renders one public page on the server: run loaders, render, and collect hydration data. */
-export async function render({ request, apiBaseUrl, cookie, publicUrl }: RenderInput): Promise<RenderResult> {
+export async function render({ request, apiBaseUrl, cookie, publicUrl, fetch }: RenderInput): Promise<RenderResult> {
   const queryClient = createQueryClient();
-  const api = createApiClient({ baseUrl: apiBaseUrl, headers: cookie ? { cookie } : {} });
+  const api = createApiClient({ baseUrl: apiBaseUrl, headers: cookie ? { cookie } : {}, fetch });
   // No session cookie: an anonymous reader. The header's "who is signed in" is known without asking the API.
   if (!hasSessionCookie(cookie)) queryClient.setQueryData(sessionOptions(api).queryKey, { account: null });
   const handler = createStaticHandler(createRoutes({ queryClient, api }));
@@ -61,10 +63,6 @@ export async function render({ request, apiBaseUrl, cookie, publicUrl }: RenderI
     html: body,
     data: serializeHydration(payload),
   };
-}
-
-function hasSessionCookie(cookie: string | undefined): boolean {
-  return (cookie ?? '').split(';').some((c) => c.trim().startsWith(`${SESSION_COOKIE}=`));
 }
 
 const HOISTED = /^(?:<title>[^<]*<\/title>|<meta\b[^>]*\/?>|<link\b[^>]*\/?>)/;

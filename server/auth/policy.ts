@@ -6,7 +6,15 @@ export type { Actor } from './actor';
 
 /** What an action is about, loaded by the route before the policy decides. */
 export type Resource =
-  | { kind: 'build'; id: number; visibility: BuildVisibility; deleted: boolean; pendingTransferTo: number | null }
+  | {
+      kind: 'build';
+      id: number;
+      visibility: BuildVisibility;
+      deleted: boolean;
+      pendingTransferTo: number | null;
+      /** The build's `content_revision` when it was loaded: the key of its cached public reads. */
+      contentRevision?: number;
+    }
   | {
       kind: 'episode';
       id: number;
@@ -14,7 +22,7 @@ export type Resource =
       visibility: BuildVisibility;
       status: EpisodeStatus;
       deleted: boolean;
-      /** The build's `content_revision` when it was loaded: the episode read's cache key. */
+      /** The build's `content_revision` when it was loaded: the key of its cached public reads. */
       contentRevision?: number;
     }
   | { kind: 'account'; userId: number }

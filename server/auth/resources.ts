@@ -7,11 +7,18 @@ import type { Resource } from './policy';
 export async function buildResource(deps: AppDeps, params: { buildId: number }): Promise<Resource | null> {
   const b = await deps.db
     .selectFrom('builds')
-    .select(['id', 'visibility', 'deleted_at', 'pending_transfer_to'])
+    .select(['id', 'visibility', 'deleted_at', 'pending_transfer_to', 'content_revision'])
     .where('id', '=', params.buildId)
     .executeTakeFirst();
   return b
-    ? { kind: 'build', id: b.id, visibility: b.visibility, deleted: b.deleted_at !== null, pendingTransferTo: b.pending_transfer_to }
+    ? {
+        kind: 'build',
+        id: b.id,
+        visibility: b.visibility,
+        deleted: b.deleted_at !== null,
+        pendingTransferTo: b.pending_transfer_to,
+        contentRevision: Number(b.content_revision),
+      }
     : null;
 }
 

@@ -2,6 +2,7 @@ import { Kysely, PostgresDialect } from 'kysely';
 import pg from 'pg';
 import type { Database } from './database';
 import { nameRegisteredStatements } from './prepared';
+import { gatedPool } from './request-gate';
 
 // int8 (bigint, count(*)) → number, refusing silently lossy values; numeric stays a string
 // so decimal quantities and rates are parsed deliberately, never as floats by accident.
@@ -23,15 +24,20 @@ export interface DbHandle {
   destroy(): Promise<void>;
 }
 
+const CONNECT_TIMEOUT_MS = 5_000;
+// A request's turn may wait behind its own earlier queries, each of which may wait for the pool:
+// the gate's timeout is the statement timeout, not the pool's connect timeout.
+const QUERY_TIMEOUT_MS = 30_000;
+
 /** Opens a pool and a Kysely instance over it; connection errors are logged, never fatal. */
 export function createDb(connectionString: string, opts: { max?: number; onError?: (err: Error) => void } = {}): DbHandle {
   const pool = new pg.Pool({
     connectionString,
     max: opts.max ?? 10,
-    connectionTimeoutMillis: 5_000,
+    connectionTimeoutMillis: CONNECT_TIMEOUT_MS,
     idleTimeoutMillis: 30_000,
     // Fail fast when the database is gone instead of hanging a request.
-    query_timeout: 30_000,
+    query_timeout: QUERY_TIMEOUT_MS,
   });
   pool.on('error', (err) => opts.onError?.(err));
   // pg-pool listens for errors only on idle clients. A client checked out between two statements
@@ -42,6 +48,6 @@ export function createDb(connectionString: string, opts: { max?: number; onError
     client.on('error', (err) => opts.onError?.(err));
     nameRegisteredStatements(client);
   });
-  const db = new Kysely<Database>({ dialect: new PostgresDialect({ pool }) });
+  const db = new Kysely<Database>({ dialect: new PostgresDialect({ pool: gatedPool(pool, QUERY_TIMEOUT_MS) }) });
   return { db, pool, destroy: () => db.destroy() };
 }

@@ -2,6 +2,7 @@ import { Router, type Request, type Response } from 'express';
 import type { z } from 'zod';
 import type { AppDeps } from '../app-deps';
 import { authorize, type Actor, type PolicyAction, type Resource } from '../auth/policy';
+import { oneConnectionAtATime } from '../db/request-gate';
 import { HttpError } from './http-error';
 import { parse } from './parse';
 import type { RateLimitName } from './rate-limit';
@@ -40,6 +41,11 @@ export interface RouteSpec<
   resource?: (deps: AppDeps, params: Infer<P>) => Promise<Resource | null>;
   /** Spends one point of each named limit per request, keyed as returned (after validation). */
   rateLimit?: (ctx: { req: Request; body: Infer<B>; actor: Actor }) => Array<[RateLimitName, string]>;
+  /**
+   * GET only, for answers that are the same whoever asks: identical requests (same address) that
+   * arrive while one runs wait for its answer instead of running again (server/services/single-flight.ts).
+   */
+  shareWhileRunning?: boolean;
   /** Returns the JSON body to send (status 200 unless the handler set another), or sends itself. */
   handler: (ctx: RouteContext<Infer<P>, Infer<Q>, Infer<B>>) => unknown;
 }
@@ -89,7 +95,12 @@ export function buildApiRouter(routes: readonly RouteSpec[], deps: AppDeps): Rou
       const query = spec.query ? parse(spec.query, req.query, 'query') : undefined;
       const body = spec.body ? parse(spec.body, req.body ?? {}, 'body') : undefined;
       for (const [name, key] of spec.rateLimit?.({ req, body, actor }) ?? []) await deps.rateLimits.consume(name, key);
-      const result = await spec.handler({ req, res, deps, actor, params, query, body, resource });
+      const ctx = { req, res, deps, actor, params, query, body, resource };
+      // A read's parallel queries take turns on one pooled connection (db/request-gate.ts), so the
+      // pool's queue counts waiting requests and its bound (loadShed) means what it says.
+      const run = async () => (spec.method === 'get' ? oneConnectionAtATime(async () => spec.handler(ctx)) : spec.handler(ctx));
+      const result =
+        spec.shareWhileRunning && spec.method === 'get' ? await deps.sharedReads.run(`route:${req.originalUrl}`, run) : await run();
       if (!res.headersSent) {
         if (result === undefined) res.status(res.statusCode === 200 ? 204 : res.statusCode).end();
         else res.json(result);

@@ -18,6 +18,7 @@ import { presentPartLine } from '../presenters/part-lines';
 import type { AppDeps } from '../app-deps';
 import { createPartLine, deletePartLine, getPartLine, updatePartLine } from '../services/part-lines';
 import { getBuildTotals, getEpisodeParts } from '../services/part-totals';
+import { sendCachedBody } from '../services/reading-cache';
 import { createSupplier, listSuppliers, mergeSuppliers } from '../services/suppliers';
 import { exportLedgerCsv, importLedgerCsv, parseLedgerCsv } from '../services/ledger-csv';
 import { sql } from 'kysely';
@@ -99,10 +100,16 @@ export const partLineRoutes = [
     params: buildParams,
     query: z.object({ scope: z.enum(['published', 'all']).default('published') }),
     resource: buildResource,
-    handler: async ({ deps, actor, params, query }): Promise<BuildTotals> => {
+    handler: async ({ deps, actor, params, query, req, res, resource }): Promise<BuildTotals | void> => {
       // Lines of drafts stay with the build team; anyone else asking for them gets the published view.
       const includeUnpublished = query.scope === 'all' && actor?.builds.has(params.buildId) === true;
-      return getBuildTotals(deps.db, params.buildId, includeUnpublished);
+      if (includeUnpublished) return getBuildTotals(deps.db, params.buildId, true);
+      // The published view is the same for everyone: kept per build content revision.
+      const revision = resource?.kind === 'build' ? resource.contentRevision : undefined;
+      if (revision === undefined) return getBuildTotals(deps.db, params.buildId, false);
+      const body = await deps.readingCache.get(`totals:${params.buildId}`, revision, () => getBuildTotals(deps.db, params.buildId, false));
+      if (!body) throw new HttpError(404, 'not_found', 'Not found');
+      sendCachedBody(req, res, body);
     },
   }),
   defineRoute({

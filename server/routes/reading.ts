@@ -22,6 +22,7 @@ export const readingRoutes = [
     summary: 'The builds directory: public builds filtered by kind of vehicle, make and decade',
     action: 'site.read',
     query: buildDirectoryQuery,
+    shareWhileRunning: true,
     handler: async ({ deps, query }): Promise<BuildDirectoryResponse> => {
       const { rows, total, makes, decades } = await listBuildDirectory(deps.db, query);
       return { items: rows.map(presentBuildCard), page: query.page, perPage: query.perPage, total, makes, decades };
@@ -50,7 +51,7 @@ export const readingRoutes = [
       const body =
         revision === undefined
           ? null
-          : await deps.readingCache.get(params.episodeId, revision, () => getEpisodeReading(deps.db, params.episodeId));
+          : await deps.readingCache.get(`reading:${params.episodeId}`, revision, () => getEpisodeReading(deps.db, params.episodeId));
       if (revision !== undefined && !body) throw new HttpError(404, 'not_found', 'Not found');
       if (body) return sendCachedBody(req, res, body);
       return orNotFound(await getEpisodeReading(deps.db, params.episodeId));
@@ -70,6 +71,8 @@ export const readingRoutes = [
     summary: 'Full-text search over published episodes and public builds',
     action: 'site.read',
     query: searchQuery,
+    // Everyone searching the same words at once shares one run of the query (it ranks every match).
+    shareWhileRunning: true,
     handler: ({ deps, query }) => search(deps.db, query.q, query.page),
   }),
 ];

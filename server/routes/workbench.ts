@@ -7,6 +7,7 @@ import { HttpError } from '../http/http-error';
 import { defineRoute } from '../http/registry';
 import { getWorkbench } from '../services/workbench';
 import { findEpisodeBySlug, getEpisodePage } from '../services/episode-page';
+import { sendCachedBody } from '../services/reading-cache';
 import type { EpisodePage } from '../../src/shared/schemas/episode-page';
 import { sql } from 'kysely';
 
@@ -101,10 +102,30 @@ export const workbenchRoutes = [
     action: 'episode.read',
     params: z.object({ buildId: idParam, episodeSlug: slug }),
     resource: buildResource,
-    handler: async ({ deps, actor, params, res }): Promise<EpisodePage> => {
-      const e = await findEpisodeBySlug(deps.db, actor, params.buildId, params.episodeSlug);
-      const page = e ? await getEpisodePage(deps, actor, params.buildId, e, params.episodeSlug) : null;
-      if (!e || !page) throw new HttpError(404, 'not_found', 'Not found');
+    handler: async ({ deps, actor, params, req, res, resource }): Promise<EpisodePage | void> => {
+      const load = async () => {
+        const e = await findEpisodeBySlug(deps.db, actor, params.buildId, params.episodeSlug);
+        const page = e ? await getEpisodePage(deps, actor, params.buildId, e, params.episodeSlug) : null;
+        return e && page ? { e, page } : null;
+      };
+      let found: Awaited<ReturnType<typeof load>> | undefined;
+      // A visitor's page is the same for every visitor: kept per build content revision, which
+      // posts bump too (migration 2026-12-03_1400). A former slug (301), a missing episode and a
+      // page with a failed section are answered fresh and not kept.
+      const revision = actor === null && resource?.kind === 'build' ? resource.contentRevision : undefined;
+      if (revision !== undefined) {
+        const held: { found?: typeof found } = {};
+        const body = await deps.readingCache.get(`episode-page:${params.buildId}:${params.episodeSlug}`, revision, async () => {
+          held.found = await load();
+          const p = held.found?.page;
+          return p && !held.found?.e.moved && p.parts && p.totals && p.figures && p.posts ? p : null;
+        });
+        if (body) return sendCachedBody(req, res, body);
+        found = held.found;
+      }
+      found ??= await load();
+      if (!found) throw new HttpError(404, 'not_found', 'Not found');
+      const { e, page } = found;
       if (e.moved) res.status(301).setHeader('location', `/api/builds/${params.buildId}/episode-page/${encodeURIComponent(e.slug)}`);
       return page;
     },

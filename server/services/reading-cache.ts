@@ -2,6 +2,7 @@ import { createHash } from 'node:crypto';
 import { gzipSync } from 'node:zlib';
 import type { Request, Response } from 'express';
 import { LRUCache } from 'lru-cache';
+import { SingleFlight } from './single-flight';
 
 /** A response body ready to send: the JSON, its gzip form and its validator. */
 export interface CachedBody {
@@ -11,7 +12,8 @@ export interface CachedBody {
 }
 
 /**
- * The episode read, kept per (episode, build content revision) in this process.
+ * Public reads of a build's content, kept per (what, build content revision) in this process: the
+ * episode read, the episode page's answer for visitors, the build's totals.
  *
  * The build's `content_revision` goes up in the same transaction as any change a reader would see
  * (the triggers of migration 2026-12-03_1130), and the read's policy lookup loads it anyway: so a
@@ -22,7 +24,7 @@ export interface CachedBody {
  */
 export class ReadingCache {
   private readonly cache: LRUCache<string, CachedBody>;
-  private readonly loading = new Map<string, Promise<CachedBody | null>>();
+  private readonly loading = new SingleFlight();
   hits = 0;
   misses = 0;
 
@@ -34,28 +36,25 @@ export class ReadingCache {
     });
   }
 
-  /** The cached body for `episodeId` at `revision`, or `load()`'s result serialised and kept (null is not kept). */
-  async get(episodeId: number, revision: number, load: () => Promise<unknown>): Promise<CachedBody | null> {
-    const key = `${episodeId}:${revision}`;
+  /**
+   * The cached body for `what` (e.g. `reading:12`) at `revision`, or `load()`'s result serialised
+   * and kept (null is not kept).
+   */
+  async get(what: string, revision: number, load: () => Promise<unknown>): Promise<CachedBody | null> {
+    const key = `${what}@${revision}`;
     const hit = this.cache.get(key);
     if (hit) {
       this.hits += 1;
       return hit;
     }
     this.misses += 1;
-    let pending = this.loading.get(key);
-    if (!pending) {
-      pending = load()
-        .then((value) => {
-          if (value === null || value === undefined) return null;
-          const body = toCachedBody(value);
-          this.cache.set(key, body);
-          return body;
-        })
-        .finally(() => this.loading.delete(key));
-      this.loading.set(key, pending);
-    }
-    return pending;
+    return this.loading.run(key, async () => {
+      const value = await load();
+      if (value === null || value === undefined) return null;
+      const body = toCachedBody(value);
+      this.cache.set(key, body);
+      return body;
+    });
   }
 }
 

@@ -19,11 +19,16 @@ afterAll(async () => {
 });
 
 async function schema(): Promise<string[]> {
-  // Columns and indexes (with their definitions), so a migration that only adds an index counts too.
+  // Columns, indexes and triggers (with their definitions), so a migration that only adds an index
+  // or a trigger counts too.
   const r = await sql<{ c: string }>`
     select table_name || '.' || column_name as c from information_schema.columns where table_schema = 'public'
     union all
     select 'index ' || indexname || ': ' || indexdef from pg_indexes where schemaname = 'public'
+    union all
+    select 'trigger ' || t.tgname || ': ' || pg_get_triggerdef(t.oid)
+      from pg_trigger t join pg_class c on c.oid = t.tgrelid join pg_namespace n on n.oid = c.relnamespace
+     where n.nspname = 'public' and not t.tgisinternal
     order by 1`.execute(handle.db);
   return r.rows.map((t) => t.c);
 }

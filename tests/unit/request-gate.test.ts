@@ -1,0 +1,110 @@
+// A request's queries take turns on one pooled connection (server/db/request-gate.ts); outside a
+// request they take connections as before. Checked against a stand-in pool that counts checkouts.
+import type pg from 'pg';
+import { describe, expect, it } from 'vitest';
+import { gatedPool, oneConnectionAtATime } from '../../server/db/request-gate';
+import { SingleFlight } from '../../server/services/single-flight';
+
+function countingPool() {
+  let out = 0;
+  const stats = { most: 0, checkouts: 0 };
+  const pool = {
+    async connect() {
+      out += 1;
+      stats.checkouts += 1;
+      stats.most = Math.max(stats.most, out);
+      const client = { release: () => void (out -= 1) };
+      return client as unknown as pg.PoolClient;
+    },
+  } as unknown as pg.Pool;
+  return { pool, stats };
+}
+
+const tick = () => new Promise((r) => setTimeout(r, 5));
+
+/** A query as Kysely runs it: check a client out, wait for the answer, give it back. */
+async function query(p: ReturnType<typeof gatedPool>): Promise<void> {
+  const c = await p.connect();
+  await tick();
+  c.release();
+}
+
+describe('one pooled connection at a time per request', () => {
+  it('runs parallel queries of one request one after another on the pool', async () => {
+    const { pool, stats } = countingPool();
+    const gated = gatedPool(pool, 1_000);
+    await oneConnectionAtATime(() => Promise.all([query(gated), query(gated), query(gated), query(gated)]));
+    expect(stats).toEqual({ most: 1, checkouts: 4 });
+  });
+
+  it('lets two requests, and code outside any request, use the pool side by side', async () => {
+    const { pool, stats } = countingPool();
+    const gated = gatedPool(pool, 1_000);
+    await Promise.all([
+      oneConnectionAtATime(() => Promise.all([query(gated), query(gated)])),
+      oneConnectionAtATime(() => Promise.all([query(gated), query(gated)])),
+      Promise.all([query(gated), query(gated)]),
+    ]);
+    expect(stats.checkouts).toBe(6);
+    expect(stats.most).toBe(4);
+  });
+
+  it("gives the request's turn back when the pool refuses a connection", async () => {
+    let fail = true;
+    const pool = {
+      async connect() {
+        if (fail) {
+          fail = false;
+          throw new Error('timeout exceeded when trying to connect');
+        }
+        return { release: () => undefined } as unknown as pg.PoolClient;
+      },
+    } as unknown as pg.Pool;
+    const gated = gatedPool(pool, 1_000);
+    await oneConnectionAtATime(async () => {
+      await expect(gated.connect()).rejects.toThrow(/timeout exceeded/);
+      const c = await gated.connect();
+      c.release();
+    });
+  });
+
+  it('fails, instead of hanging, when a query waits for a turn its own request never gives back', async () => {
+    const { pool } = countingPool();
+    const gated = gatedPool(pool, 50);
+    await oneConnectionAtATime(async () => {
+      const held = await gated.connect(); // a transaction's connection, say
+      await expect(gated.connect()).rejects.toThrow(/timeout exceeded when trying to connect/);
+      held.release();
+    });
+  });
+});
+
+describe('single flight', () => {
+  it('runs a key once for everyone who asks while it runs, and again after', async () => {
+    const flights = new SingleFlight();
+    let runs = 0;
+    const work = async () => {
+      const run = (runs += 1);
+      await tick();
+      return run;
+    };
+    const answers = await Promise.all([flights.run('a', work), flights.run('a', work), flights.run('a', work)]);
+    expect(answers).toEqual([1, 1, 1]);
+    expect(await flights.run('a', work)).toBe(2);
+    expect(await Promise.all([flights.run('b', work), flights.run('c', work)])).toEqual([3, 4]);
+  });
+
+  it('shares a failure with the callers waiting for it, then forgets it', async () => {
+    const flights = new SingleFlight();
+    let calls = 0;
+    const failing = async () => {
+      calls += 1;
+      await tick();
+      throw new Error('database gone');
+    };
+    const results = await Promise.allSettled([flights.run('k', failing), flights.run('k', failing)]);
+    expect(results.map((r) => r.status)).toEqual(['rejected', 'rejected']);
+    expect(calls).toBe(1);
+    await expect(flights.run('k', async () => 'back')).resolves.toBe('back');
+  });
+});
