@@ -113,7 +113,7 @@ describe('frontPageQuery', () => {
     }
   });
 
-  it('agrees with the API\'s page query', () => {
+  it("agrees with the API's page query", () => {
     const pages = ['1', '3', ' 4 ', '07', '1e3', '0x10', '10000', '10001', '0', '-1', '2.5', '', 'abc', 'Infinity', '1_000'];
     for (const page of pages) {
       const parsed = latestEpisodesQuery.safeParse({ page, perPage: FRONT_PAGE_SIZE });

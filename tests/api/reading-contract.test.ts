@@ -23,7 +23,11 @@ beforeAll(async () => {
   app = await startTestApp();
   world = await makeWorld(app);
   // The world's draft carries a part line, a figure and an open item: publish it so visitors read them too.
-  await app.deps.db.updateTable('episodes').set({ status: 'published', published_at: new Date() }).where('id', '=', world.ids.draft).execute();
+  await app.deps.db
+    .updateTable('episodes')
+    .set({ status: 'published', published_at: new Date() })
+    .where('id', '=', world.ids.draft)
+    .execute();
   const reply = await world.clients.owner.post(`/api/posts/${world.ids.post}/replies`, { body: 'Axle stands from the co-op.' });
   expect(reply.status).toBe(201);
 });
