@@ -1,4 +1,4 @@
-import { formatMinor } from '../../../shared/money';
+import { formatMinor } from '../../../shared/money-format';
 import type { PartLine } from '../../../shared/schemas/parts';
 import { SUPPORT_KIND_LABELS } from '../../../shared/constants/sponsors';
 
