@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
-import { ApiError, createApiClient, CSRF_HEADER, noContent } from './api-client';
+import { apiErrorBody } from '../shared/schemas/common';
+import { ApiError, createApiClient, CSRF_HEADER, errorOf, noContent, typed } from './api-client';
 
 interface Call {
   method: string;
@@ -147,5 +148,44 @@ describe('createApiClient CSRF handling', () => {
         : json(429, { error: { code: 'rate_limited', message: 'Slow down' } }, { 'retry-after': '120' });
     const api = createApiClient({ fetch: fakeFetch });
     await expect(api.post('/api/sign-in-links', {}, saved)).rejects.toMatchObject({ status: 429, code: 'rate_limited', retryAfter: 120 });
+  });
+});
+
+describe('reading answers', () => {
+  it('validates with a zod schema and trusts the answer with typed()', async () => {
+    const fakeFetch: typeof fetch = async () => json(200, { ok: 'yes', extra: 1 });
+    const api = createApiClient({ fetch: fakeFetch });
+    await expect(api.get('/api/x', z.object({ ok: z.boolean() }))).rejects.toThrow();
+    await expect(api.get('/api/x', typed<{ ok: string }>())).resolves.toEqual({ ok: 'yes', extra: 1 });
+  });
+
+  it('turns a CSRF token answer without a token into an error', async () => {
+    const fakeFetch: typeof fetch = async () => json(200, { nope: true });
+    const api = createApiClient({ fetch: fakeFetch });
+    await expect(api.post('/api/things', {}, saved)).rejects.toThrow(/token/);
+  });
+
+  it('reads the error shape exactly as the shared apiErrorBody schema does', () => {
+    const bodies: unknown[] = [
+      { error: { code: 'not_found', message: 'Not found' } },
+      { error: { code: 'invalid', message: 'Check the form', fields: { title: ['required'], body: [] } } },
+      { error: { code: 'invalid', message: 'Check the form', fields: { title: 'required' } } },
+      { error: { code: 'invalid', message: 'Check the form', fields: ['title'] } },
+      { error: { code: 'invalid', message: 'Check the form', fields: null } },
+      { error: { code: 'x', message: 'y', extra: true }, more: 1 },
+      { error: { code: 1, message: 'y' } },
+      { error: { code: 'x' } },
+      { error: 'x' },
+      { error: null },
+      {},
+      [],
+      null,
+      undefined,
+      'text',
+    ];
+    for (const body of bodies) {
+      const parsed = apiErrorBody.safeParse(body);
+      expect(errorOf(body), JSON.stringify(body)).toEqual(parsed.success ? parsed.data.error : null);
+    }
   });
 });

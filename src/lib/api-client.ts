@@ -1,7 +1,20 @@
-import { z } from 'zod';
 import { CSRF_HEADER } from '../shared/http';
-import { csrfResponse } from '../shared/schemas/accounts';
-import { apiErrorBody } from '../shared/schemas/common';
+import type { ApiErrorBody } from '../shared/schemas/common';
+
+/**
+ * What reads an answer: anything with `parse`. A zod schema is one (forms, the workbench and the
+ * editor validate answers with theirs); public reading code passes `typed<T>()`, which trusts the
+ * server's answer as T without validating, so no zod code loads on the public pages.
+ */
+export interface Reader<T> {
+  parse(data: unknown): T;
+}
+
+/** Reads an answer as T without checking it (the server is typed against the same shared schemas). */
+export function typed<T>(): Reader<T> {
+  return trusted as Reader<T>;
+}
+const trusted: Reader<unknown> = { parse: (data) => data };
 
 /** An API answer that was not 2xx, carrying the server's error code and field messages. */
 export class ApiError extends Error {
@@ -29,28 +42,37 @@ export interface ApiClientOptions {
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
 export interface ApiClient {
-  request<S extends z.ZodType>(method: Method, path: string, schema: S, body?: unknown, signal?: AbortSignal): Promise<z.infer<S>>;
-  get<S extends z.ZodType>(path: string, schema: S, signal?: AbortSignal): Promise<z.infer<S>>;
-  post<S extends z.ZodType>(path: string, body: unknown, schema: S, signal?: AbortSignal): Promise<z.infer<S>>;
-  put<S extends z.ZodType>(path: string, body: unknown, schema: S, signal?: AbortSignal): Promise<z.infer<S>>;
-  patch<S extends z.ZodType>(path: string, body: unknown, schema: S, signal?: AbortSignal): Promise<z.infer<S>>;
-  del<S extends z.ZodType>(path: string, schema: S, signal?: AbortSignal): Promise<z.infer<S>>;
+  request<T>(method: Method, path: string, schema: Reader<T>, body?: unknown, signal?: AbortSignal): Promise<T>;
+  get<T>(path: string, schema: Reader<T>, signal?: AbortSignal): Promise<T>;
+  post<T>(path: string, body: unknown, schema: Reader<T>, signal?: AbortSignal): Promise<T>;
+  put<T>(path: string, body: unknown, schema: Reader<T>, signal?: AbortSignal): Promise<T>;
+  patch<T>(path: string, body: unknown, schema: Reader<T>, signal?: AbortSignal): Promise<T>;
+  del<T>(path: string, schema: Reader<T>, signal?: AbortSignal): Promise<T>;
   /** Drops the cached CSRF token; call it whenever the session changes (sign-in, sign-out, deletion). */
   forgetCsrfToken(): void;
   /**
    * POSTs a multipart form with upload progress (XMLHttpRequest: fetch reports no upload progress).
    * Browser only. `onProgress` gets 0…1; aborting the signal cancels the upload (ApiError status 0).
    */
-  upload<S extends z.ZodType>(
+  upload<T>(
     path: string,
     form: FormData,
-    schema: S,
+    schema: Reader<T>,
     opts?: { onProgress?: (share: number) => void; signal?: AbortSignal },
-  ): Promise<z.infer<S>>;
+  ): Promise<T>;
 }
 
 /** For 204 answers: whatever arrives (normally nothing) is read as `undefined`. */
-export const noContent = z.unknown().transform((): undefined => undefined);
+export const noContent: Reader<undefined> = { parse: () => undefined };
+
+/** The CSRF token answer (`{ token }`); the same shape as csrfResponse in the shared schemas. */
+const csrfAnswer: Reader<{ token: string }> = {
+  parse(data) {
+    const token = isRecord(data) ? data.token : undefined;
+    if (typeof token !== 'string') throw new TypeError('the CSRF token answer has no token');
+    return { token };
+  },
+};
 
 export { CSRF_HEADER };
 export const CSRF_TOKEN_PATH = '/api/csrf-token';
@@ -86,7 +108,7 @@ export function createApiClient(options: ApiClientOptions = {}): ApiClient {
 
   function getCsrfToken(): Promise<string> {
     if (!csrfToken) {
-      const pending = exchange('GET', CSRF_TOKEN_PATH, undefined, undefined).then((ex) => read(ex, csrfResponse).token);
+      const pending = exchange('GET', CSRF_TOKEN_PATH, undefined, undefined).then((ex) => read(ex, csrfAnswer).token);
       csrfToken = pending;
       // A failed fetch must not stick: the next write tries again.
       pending.catch(() => {
@@ -96,7 +118,7 @@ export function createApiClient(options: ApiClientOptions = {}): ApiClient {
     return csrfToken;
   }
 
-  async function request<S extends z.ZodType>(method: Method, path: string, schema: S, body?: unknown, signal?: AbortSignal) {
+  async function request<T>(method: Method, path: string, schema: Reader<T>, body?: unknown, signal?: AbortSignal): Promise<T> {
     if (method === 'GET') return read(await exchange(method, path, body, signal), schema);
     let ex = await exchange(method, path, body, signal, await getCsrfToken());
     if (isCsrfInvalid(ex)) {
@@ -144,21 +166,36 @@ export function createApiClient(options: ApiClientOptions = {}): ApiClient {
 }
 
 function isCsrfInvalid({ res, json }: Exchange): boolean {
-  if (res.status !== 403) return false;
-  const parsed = apiErrorBody.safeParse(json);
-  return parsed.success && parsed.data.error.code === CSRF_INVALID;
+  return res.status === 403 && errorOf(json)?.code === CSRF_INVALID;
 }
 
-function read<S extends z.ZodType>({ res, json }: Exchange, schema: S): z.infer<S> {
+function read<T>({ res, json }: Exchange, schema: Reader<T>): T {
   if (!res.ok) throw toApiError(res, json);
-  return schema.parse(json) as z.infer<S>;
+  return schema.parse(json);
+}
+
+function isRecord(v: unknown): v is Record<string, unknown> {
+  return typeof v === 'object' && v !== null && !Array.isArray(v);
+}
+
+/**
+ * The `error` of the API's one error shape (apiErrorBody in the shared schemas), or null when the body
+ * is not of that shape: code and message strings, and fields, when present, a record of string lists.
+ */
+export function errorOf(json: unknown): ApiErrorBody['error'] | null {
+  const error = isRecord(json) ? json.error : undefined;
+  if (!isRecord(error) || typeof error.code !== 'string' || typeof error.message !== 'string') return null;
+  const { code, message, fields } = error;
+  if (fields === undefined) return { code, message };
+  if (!isRecord(fields) || !Object.values(fields).every((f) => Array.isArray(f) && f.every((x) => typeof x === 'string'))) return null;
+  return { code, message, fields: fields as Record<string, string[]> };
 }
 
 function toApiError(res: Response, json: unknown): ApiError {
   const retryAfter = parseRetryAfter(res.headers.get('retry-after'));
-  const parsed = apiErrorBody.safeParse(json);
-  if (parsed.success) {
-    const { code, message, fields } = parsed.data.error;
+  const error = errorOf(json);
+  if (error) {
+    const { code, message, fields } = error;
     return new ApiError(res.status, code, message, fields, retryAfter);
   }
   return new ApiError(res.status, 'http_error', `Request failed with status ${res.status}`, undefined, retryAfter);

@@ -16,7 +16,7 @@ import { useSession } from '../features/accounts/api/get-session';
 import { accountPaths } from '../features/accounts/paths';
 import { FollowButtons } from '../features/following/components/follow-buttons';
 import { episodePostsOptions, useEpisodePosts } from '../features/posts/api/get-episode-posts';
-import { EpisodePosts } from '../features/posts/components/episode-posts';
+import { EpisodePostsSection, preloadEpisodePosts } from '../features/posts/components/lazy-episode-posts';
 import { groupByChapter } from '../shared/post-anchors';
 import { buildTotalsOptions, useBuildTotals } from '../features/parts/api/get-build-totals';
 import { episodePartsOptions, useEpisodeParts } from '../features/parts/api/get-episode-parts';
@@ -37,6 +37,9 @@ import type { LoaderDeps } from './route-guards';
 export function episodePageLoader(deps: LoaderDeps) {
   return async ({ request, params }: { request: Request; params: Record<string, string | undefined> }) => {
     const { queryClient, api } = deps;
+    // The posts section's chunk loads beside the data, so the page renders with it (lazy-episode-posts.tsx);
+    // if it fails, the section asks for it again when it renders.
+    const posts = preloadEpisodePosts().catch(() => undefined);
     const build = await resolveBuild(deps, request, params);
     // One request for the page (it used to be five): each part goes into the cache entry its section reads.
     const page = await needData(fetchEpisodePage(api, build.buildId, params.episodeSlug ?? '', request.signal));
@@ -48,6 +51,7 @@ export function episodePageLoader(deps: LoaderDeps) {
     if (page.totals) queryClient.setQueryData(buildTotalsOptions(api, build.buildId).queryKey, page.totals);
     if (page.figures) queryClient.setQueryData(episodeFiguresOptions(api, episodeId).queryKey, page.figures);
     if (page.posts) queryClient.setQueryData(episodePostsOptions(api, episodeId).queryKey, page.posts);
+    await posts;
     return { episodeId, buildId: build.buildId };
   };
 }
@@ -226,7 +230,7 @@ function Episode({ episode }: { episode: EpisodeReading }) {
           <div className="mt-10">
             <EpisodeFigures episodeId={episode.id} />
           </div>
-          <EpisodePosts episodeId={episode.id} chapters={episode.chapters} signInPath={accountPaths.signIn(canonical)} />
+          <EpisodePostsSection episodeId={episode.id} chapters={episode.chapters} signInPath={accountPaths.signIn(canonical)} />
           <EpisodeOpenItems episode={episode} />
           <EpisodeNeighbours episode={episode} />
         </div>

@@ -5,7 +5,7 @@ import { createMemoryRouter, RouterProvider } from 'react-router';
 import { afterEach, describe, expect, it } from 'vitest';
 import { createApiClient } from '../lib/api-client';
 import { ApiProvider } from '../lib/api-context';
-import type { EpisodeListItem, LatestEpisodesResponse } from '../shared/schemas/episodes';
+import { latestEpisodesQuery, type EpisodeListItem, type LatestEpisodesResponse } from '../shared/schemas/episodes';
 import { FRONT_PAGE_SIZE, FrontPage, frontPageQuery } from './front-page';
 
 function episode(overrides: Partial<EpisodeListItem> = {}): EpisodeListItem {
@@ -107,8 +107,18 @@ describe('FrontPage', () => {
 describe('frontPageQuery', () => {
   it('reads the page and falls back to page 1 on bad input', () => {
     expect(frontPageQuery(new URLSearchParams('page=3'))).toEqual({ page: 3, perPage: 12 });
-    for (const bad of ['page=0', 'page=-2', 'page=abc', 'page=2.5', 'page=', '']) {
+    expect(frontPageQuery(new URLSearchParams('page=10000'))).toEqual({ page: 10_000, perPage: 12 });
+    for (const bad of ['page=0', 'page=-2', 'page=abc', 'page=2.5', 'page=', '', 'page=10001', 'page=Infinity', 'page=NaN']) {
       expect(frontPageQuery(new URLSearchParams(bad))).toEqual({ page: 1, perPage: 12 });
+    }
+  });
+
+  it("agrees with the API's page query", () => {
+    const pages = ['1', '3', ' 4 ', '07', '1e3', '0x10', '10000', '10001', '0', '-1', '2.5', '', 'abc', 'Infinity', '1_000'];
+    for (const page of pages) {
+      const parsed = latestEpisodesQuery.safeParse({ page, perPage: FRONT_PAGE_SIZE });
+      const expected = parsed.success ? parsed.data : { page: 1, perPage: FRONT_PAGE_SIZE };
+      expect(frontPageQuery(new URLSearchParams({ page })), page).toEqual(expected);
     }
   });
 });

@@ -6,17 +6,21 @@ import { StateMessage } from '../components/ui/state-message';
 import { useLatestEpisodes } from '../features/episodes/api/get-latest-episodes';
 import { EpisodeCard } from '../features/episodes/components/episode-card';
 import { paths } from '../shared/paths';
-import { latestEpisodesQuery, type LatestEpisodesQuery, type LatestEpisodesResponse } from '../shared/schemas/episodes';
+import type { LatestEpisodesQuery, LatestEpisodesResponse } from '../shared/schemas/episodes';
 
 export const FRONT_PAGE_SIZE = 12;
 
-/** The query the front page shows for these search params; a bad `page` quietly means page 1. */
+/** The highest page the API's page query accepts (pageQuery in src/shared/schemas/common.ts). */
+const MAX_PAGE = 10_000;
+
+/**
+ * The query the front page shows for these search params; a bad `page` quietly means page 1. The
+ * same rule as the API's page query (a whole number from 1 to 10 000), without loading zod here.
+ */
 export function frontPageQuery(searchParams: URLSearchParams): LatestEpisodesQuery {
-  const parsed = latestEpisodesQuery.safeParse({
-    page: searchParams.get('page') ?? undefined,
-    perPage: FRONT_PAGE_SIZE,
-  });
-  return parsed.success ? parsed.data : { page: 1, perPage: FRONT_PAGE_SIZE };
+  const text = searchParams.get('page');
+  const page = text === null ? 1 : Number(text);
+  return { page: Number.isInteger(page) && page >= 1 && page <= MAX_PAGE ? page : 1, perPage: FRONT_PAGE_SIZE };
 }
 
 const TITLE = 'Restoration builds, episode by episode';

@@ -1,4 +1,4 @@
-import { DEFAULT_VIDEO_LINK_PATTERN } from './schemas/builds';
+import { DEFAULT_VIDEO_LINK_PATTERN } from './constants/builds';
 
 // Chapters of an episode: start times as a person writes them (m:ss, h:mm:ss), the rules video
 // hosts apply to chapter lists, the description block creators paste to and from a host, and

@@ -1,7 +1,7 @@
 // How a recorded figure reads in words, shared by the public figure cards and the editor's rows.
 
 import { findGrade } from './fasteners';
-import { TIGHTENING_METHOD_LABELS, VALUE_SOURCE_LABELS, type TighteningMethod, type ValueSource } from './schemas/figures';
+import { TIGHTENING_METHOD_LABELS, VALUE_SOURCE_LABELS, type TighteningMethod, type ValueSource } from './constants/figures';
 import { convertTorque, formatNumber, roundTorque, TORQUE_UNIT_LABELS, type TorqueUnit, type WrenchRange } from './torque';
 
 /** "then 90°, then 90°" for torque plus angle; empty for the other methods. */

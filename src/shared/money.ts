@@ -16,6 +16,9 @@
  */
 import currencyCodes from 'currency-codes';
 
+/** Showing amounts lives in money-format.ts, which the public pages load without the ISO 4217 table. */
+export { formatMinor } from './money-format';
+
 /** Quantities carry at most three decimals (e.g. 2.125 litres); stored as numeric(12,3). */
 export const QUANTITY_SCALE = 3;
 /** Exchange rates carry at most eight decimals; stored as numeric(18,8). */
@@ -130,22 +133,4 @@ export function decimalToMinor(text: string, currency: string): number | null {
   if (v === null) return null;
   const n = Number(v);
   return Number.isSafeInteger(n) ? n : null;
-}
-
-// Building an Intl.NumberFormat costs far more than formatting with one (a server-rendered episode
-// page formats hundreds of amounts): one formatter per currency, made on first use.
-const formatters = new Map<string, { exp: number; format: Intl.NumberFormat }>();
-
-/** For display only (never for arithmetic): 1234 EUR → "€12.34", in a fixed locale so server and browser agree. */
-export function formatMinor(minor: number, currency: string): string {
-  let f = formatters.get(currency);
-  if (!f) {
-    const exp = currencyExponent(currency) ?? 2;
-    f = {
-      exp,
-      format: new Intl.NumberFormat('en-GB', { style: 'currency', currency, minimumFractionDigits: exp, maximumFractionDigits: exp }),
-    };
-    formatters.set(currency, f);
-  }
-  return f.format.format(minor / 10 ** f.exp);
 }

@@ -11,6 +11,7 @@ import {
   parseScaled,
   roundDiv,
 } from '../../src/shared/money';
+import { displayExponent, formatMinor } from '../../src/shared/money-format';
 import { computeTotals, type TotalsLine } from '../../src/shared/parts-totals';
 
 describe('ISO 4217 minor units', () => {
@@ -30,6 +31,19 @@ describe('ISO 4217 minor units', () => {
   it('agree with the currency-codes package for every code it knows', () => {
     for (const code of knownCurrencies()) expect(currencyExponent(code), code).toBe(currencyCodes.code(code)!.digits);
     expect(knownCurrencies().length).toBeGreaterThan(150);
+  });
+
+  it('are shown with the same decimals by money-format.ts, which carries only the codes that are not 2', () => {
+    for (const code of currencyCodes.codes()) {
+      expect(displayExponent(code), code).toBe(currencyExponent(code) ?? 2);
+      expect(displayExponent(code.toLowerCase()), code).toBe(currencyExponent(code) ?? 2);
+    }
+    expect(displayExponent('ZZZ')).toBe(2);
+    expect(formatMinor(1234, 'EUR')).toBe('€12.34');
+    expect(formatMinor(1234, 'GBP')).toBe('£12.34');
+    expect(formatMinor(500, 'JPY')).toBe('JP¥500');
+    expect(formatMinor(12345, 'KWD')).toBe('KWD\u00a012.345');
+    expect(formatMinor(-1234, 'EUR')).toBe('-€12.34');
   });
 });
 

@@ -1,14 +1,9 @@
-import { returnTo as returnToSchema } from '../../shared/schemas/accounts';
+/** A same-site path to return to after signing in (the open-redirect rule lives in src/shared/return-to.ts). */
+export { safeReturnTo } from '../../shared/return-to';
 
 /** Encodes a path for a query value; slashes stay readable, `#` and `=` do not (the fragment must survive). */
 function encodePath(path: string): string {
   return encodeURIComponent(path).replace(/%2F/gi, '/');
-}
-
-/** A same-site path to return to, or the front page when the value is missing or points elsewhere. */
-export function safeReturnTo(value: string | null | undefined): string {
-  const parsed = returnToSchema.safeParse(value ?? '');
-  return parsed.success ? parsed.data : '/';
 }
 
 /** URL paths of the account screens. (They belong in src/shared/paths.ts once that file takes them.) */

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isSameSitePath, RETURN_TO_MAX } from '../return-to';
 import { pagedList, pageQuery } from './common';
 
 export const handle = z.string().regex(/^[a-z0-9][a-z0-9-]{1,38}$/, 'lower-case letters, digits and dashes, 2–39 characters');
@@ -9,10 +10,7 @@ export const emailAddress = z
 export const idParam = z.coerce.number().int().positive();
 
 /** A same-site path to return to after signing in; anything else falls back to the front page. */
-export const returnTo = z
-  .string()
-  .max(500)
-  .refine((p) => p.startsWith('/') && !p.startsWith('//') && !p.startsWith('/\\'), 'must be a path on this site');
+export const returnTo = z.string().max(RETURN_TO_MAX).refine(isSameSitePath, 'must be a path on this site');
 
 export const buildMembership = z.object({
   buildId: z.number().int(),

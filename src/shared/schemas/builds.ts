@@ -1,21 +1,7 @@
 import { z } from 'zod';
+import { DEFAULT_VIDEO_LINK_PATTERN, VEHICLE_KINDS, VISIBILITIES } from '../constants/builds';
 
-/** The vehicle systems every new build starts with (DESIGN.md), and which are safety-critical. */
-export const DEFAULT_SYSTEMS: ReadonlyArray<{ key: string; name: string; safetyCritical: boolean }> = [
-  { key: 'cooling', name: 'Cooling', safetyCritical: true },
-  { key: 'fuel', name: 'Fuel', safetyCritical: true },
-  { key: 'brakes', name: 'Brakes', safetyCritical: true },
-  { key: 'electrical', name: 'Electrical', safetyCritical: true },
-  { key: 'engine', name: 'Engine', safetyCritical: false },
-  { key: 'transmission', name: 'Transmission', safetyCritical: false },
-  { key: 'suspension', name: 'Suspension', safetyCritical: true },
-  { key: 'steering', name: 'Steering', safetyCritical: true },
-  { key: 'body', name: 'Body', safetyCritical: false },
-  { key: 'interior', name: 'Interior', safetyCritical: false },
-];
-
-export const VEHICLE_KINDS = ['car', 'motorcycle', 'tractor', 'boat', 'other'] as const;
-export const VISIBILITIES = ['public', 'unlisted', 'private'] as const;
+export { DEFAULT_SYSTEMS, DEFAULT_VIDEO_LINK_PATTERN, VEHICLE_KINDS, VISIBILITIES } from '../constants/builds';
 
 export const systemKey = z.string().regex(/^[a-z0-9][a-z0-9-]{0,39}$/, 'lower-case letters, digits and dashes');
 export const buildSystem = z.object({
@@ -43,7 +29,6 @@ export const videoLinkPattern = z
     /^#?[A-Za-z0-9_.~-]+=[A-Za-z0-9_.~{}-]*\{seconds\}[A-Za-z0-9_.~{}-]*(&[A-Za-z0-9_.~-]+=[A-Za-z0-9_.~{}-]*)*$/,
     'like t={seconds} or #t={seconds}',
   );
-export const DEFAULT_VIDEO_LINK_PATTERN = 't={seconds}';
 
 const buildFields = {
   title: z.string().trim().min(1, 'needs a title').max(120),

@@ -1,25 +1,12 @@
 import { z } from 'zod';
+import { TIGHTENING_METHODS, VALUE_SOURCES } from '../constants/figures';
 import { GRADE_CODES } from '../fasteners';
 import { THREAD_CODES } from '../threads';
 import { TORQUE_UNITS } from '../torque';
 import { systemKey } from './builds';
 
-export const TIGHTENING_METHODS = ['torque', 'torque-angle', 'snug'] as const;
-export type TighteningMethod = (typeof TIGHTENING_METHODS)[number];
-export const TIGHTENING_METHOD_LABELS: Record<TighteningMethod, string> = {
-  torque: 'Torque',
-  'torque-angle': 'Torque plus angle',
-  snug: 'By hand to snug',
-};
-
-export const VALUE_SOURCES = ['workshop-manual', 'common-practice', 'measured', 'estimate'] as const;
-export type ValueSource = (typeof VALUE_SOURCES)[number];
-export const VALUE_SOURCE_LABELS: Record<ValueSource, string> = {
-  'workshop-manual': 'Workshop manual',
-  'common-practice': 'Common practice',
-  measured: 'Measured',
-  estimate: 'Estimate',
-};
+export { TIGHTENING_METHOD_LABELS, TIGHTENING_METHODS, VALUE_SOURCE_LABELS, VALUE_SOURCES } from '../constants/figures';
+export type { TighteningMethod, ValueSource } from '../constants/figures';
 
 const torqueUnit = z.enum(TORQUE_UNITS, { message: `one of ${TORQUE_UNITS.join(', ')}` });
 const gradeCode = z.enum(GRADE_CODES as [string, ...string[]], { message: 'not a strength grade in our tables' }).nullable();

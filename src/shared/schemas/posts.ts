@@ -1,20 +1,11 @@
 import { z } from 'zod';
+import { POST_KINDS, POST_STATES } from '../constants/posts';
 
 // Posts: questions and suggestions on an episode, anchored to a chapter (by its start) and
 // optionally a moment; replies one level deep. DESIGN.md, "Post".
 
-export const POST_KINDS = ['question', 'suggestion'] as const;
-export type PostKind = (typeof POST_KINDS)[number];
-export const POST_STATES = ['open', 'answered', 'adopted', 'set-aside'] as const;
-export type PostState = (typeof POST_STATES)[number];
-/** The states each kind may take; anything else is refused with 400. */
-export const STATES_BY_KIND: Record<PostKind, readonly PostState[]> = {
-  question: ['open', 'answered'],
-  suggestion: ['open', 'adopted', 'set-aside'],
-};
-export const STATE_LABELS: Record<PostState, string> = { open: 'Open', answered: 'Answered', adopted: 'Adopted', 'set-aside': 'Set aside' };
-/** Authors may edit for this long after posting; edits are marked. */
-export const EDIT_WINDOW_MINUTES = 15;
+export { EDIT_WINDOW_MINUTES, POST_KINDS, POST_STATES, STATE_LABELS, STATES_BY_KIND } from '../constants/posts';
+export type { PostKind, PostState } from '../constants/posts';
 
 const body = z.string().trim().min(1, 'write something first').max(4000);
 

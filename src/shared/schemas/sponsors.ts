@@ -1,11 +1,12 @@
 import { z } from 'zod';
+import { SUPPORT_KINDS } from '../constants/sponsors';
 import { pagedList, pageQuery } from './common';
 
 // Sponsors (DESIGN.md "Sponsor", "sponsorship", "support", "Disclosure", "Money words"): the API
 // contract shared by the server, the client and the benchmarks.
 
-export const SUPPORT_KINDS = ['gifted', 'discounted', 'paid'] as const;
-export type SupportKind = (typeof SUPPORT_KINDS)[number];
+export { SUPPORT_KIND_LABELS, SUPPORT_KINDS } from '../constants/sponsors';
+export type { SupportKind } from '../constants/sponsors';
 
 /** A calendar day, YYYY-MM-DD, that exists. */
 export const isoDay = z
@@ -126,8 +127,6 @@ export type SponsorList = z.infer<typeof sponsorList>;
 
 export const sponsorshipList = z.object({ items: z.array(sponsorship) });
 export type SponsorshipList = z.infer<typeof sponsorshipList>;
-
-export const SUPPORT_KIND_LABELS: Record<SupportKind, string> = { gifted: 'Gifted', discounted: 'Discounted', paid: 'Paid' };
 
 /** An episode's disclosure (src/shared/disclosure.ts): a short label, plain sentences, who is credited. */
 export const disclosure = z.object({ label: z.string(), text: z.string(), sponsors: z.array(sponsorRef), affiliate: z.boolean() });

@@ -1,14 +1,14 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { ApiClient } from '../../../lib/api-client';
+import { typed, type ApiClient } from '../../../lib/api-client';
 import { useApi } from '../../../lib/api-context';
-import { sessionResponse } from '../../../shared/schemas/accounts';
+import type { SessionResponse } from '../../../shared/schemas/accounts';
 import { sessionKeys } from './keys';
 
 /** Who is signed in (with memberships and the admin flag), or `{ account: null }` for a visitor. */
 export function sessionOptions(api: ApiClient) {
   return queryOptions({
     queryKey: sessionKeys.current(),
-    queryFn: ({ signal }) => api.get('/api/session', sessionResponse, signal),
+    queryFn: ({ signal }) => api.get('/api/session', typed<SessionResponse>(), signal),
   });
 }
 

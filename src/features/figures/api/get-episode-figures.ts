@@ -1,14 +1,14 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { ApiClient } from '../../../lib/api-client';
+import { typed, type ApiClient } from '../../../lib/api-client';
 import { useApi } from '../../../lib/api-context';
-import { figureList } from '../../../shared/schemas/figures';
+import type { FigureList } from '../../../shared/schemas/figures';
 import { figureKeys } from './keys';
 
 /** An episode's figures with their checks and cautions; prime it in the episode page's loader. */
 export function episodeFiguresOptions(api: ApiClient, episodeId: number) {
   return queryOptions({
     queryKey: figureKeys.episode(episodeId),
-    queryFn: ({ signal }) => api.get(`/api/episodes/${episodeId}/figures`, figureList, signal),
+    queryFn: ({ signal }) => api.get(`/api/episodes/${episodeId}/figures`, typed<FigureList>(), signal),
   });
 }
 

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { noContent } from '../../../lib/api-client';
+import { noContent, typed } from '../../../lib/api-client';
 import { useApi } from '../../../lib/api-context';
-import { noticePreferences, type NoticePreferences } from '../../../shared/schemas/following';
+import type { NoticePreferences } from '../../../shared/schemas/following';
 import { followingKeys } from './keys';
 
 export type FollowTarget = { kind: 'build'; buildId: number } | { kind: 'creator'; handle: string };
@@ -33,7 +33,7 @@ export function useSaveNoticePreferences() {
   const api = useApi();
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (prefs: NoticePreferences) => api.put('/api/account/notices', prefs, noticePreferences),
+    mutationFn: (prefs: NoticePreferences) => api.put('/api/account/notices', prefs, typed<NoticePreferences>()),
     onSuccess: (saved) => queryClient.setQueryData(followingKeys.preferences(), saved),
   });
 }

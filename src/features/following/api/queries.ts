@@ -1,14 +1,14 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { ApiClient } from '../../../lib/api-client';
+import { typed, type ApiClient } from '../../../lib/api-client';
 import { useApi } from '../../../lib/api-context';
-import { followingResponse, noticePreferences, notificationsResponse } from '../../../shared/schemas/following';
+import type { FollowingResponse, NoticePreferences, NotificationsResponse } from '../../../shared/schemas/following';
 import { SIGNED_IN_ONLY } from '../../../lib/query-client';
 import { followingKeys } from './keys';
 
 export function followingOptions(api: ApiClient) {
   return queryOptions({
     queryKey: followingKeys.following(),
-    queryFn: ({ signal }) => api.get('/api/following', followingResponse, signal),
+    queryFn: ({ signal }) => api.get('/api/following', typed<FollowingResponse>(), signal),
     meta: SIGNED_IN_ONLY,
   });
 }
@@ -19,7 +19,7 @@ export function useFollowing(enabled = true) {
 export function notificationsOptions(api: ApiClient) {
   return queryOptions({
     queryKey: followingKeys.notifications(),
-    queryFn: ({ signal }) => api.get('/api/notifications', notificationsResponse, signal),
+    queryFn: ({ signal }) => api.get('/api/notifications', typed<NotificationsResponse>(), signal),
     meta: SIGNED_IN_ONLY,
   });
 }
@@ -31,7 +31,7 @@ export function useNotifications(enabled = true) {
 export function noticePreferencesOptions(api: ApiClient) {
   return queryOptions({
     queryKey: followingKeys.preferences(),
-    queryFn: ({ signal }) => api.get('/api/account/notices', noticePreferences, signal),
+    queryFn: ({ signal }) => api.get('/api/account/notices', typed<NoticePreferences>(), signal),
   });
 }
 export function useNoticePreferences() {

@@ -1,14 +1,14 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { ApiClient } from '../../../lib/api-client';
+import { typed, type ApiClient } from '../../../lib/api-client';
 import { useApi } from '../../../lib/api-context';
-import { episodeParts } from '../../../shared/schemas/parts';
+import type { EpisodeParts } from '../../../shared/schemas/parts';
 import { partKeys } from './keys';
 
 /** An episode's parts list with its totals. */
 export function episodePartsOptions(api: ApiClient, episodeId: number) {
   return queryOptions({
     queryKey: partKeys.episode(episodeId),
-    queryFn: ({ signal }) => api.get(`/api/episodes/${episodeId}/part-lines`, episodeParts, signal),
+    queryFn: ({ signal }) => api.get(`/api/episodes/${episodeId}/part-lines`, typed<EpisodeParts>(), signal),
   });
 }
 

@@ -2,7 +2,7 @@ import { SupportTag } from './support-tag';
 import { useState } from 'react';
 import { Plate } from '../../../components/ui/plate';
 import { formatTime } from '../../../shared/chapters';
-import { formatMinor } from '../../../shared/money';
+import { formatMinor } from '../../../shared/money-format';
 import type { BuildTotals, EpisodeParts, PartLine } from '../../../shared/schemas/parts';
 
 type Grouping = 'chapter' | 'system';

@@ -1,6 +1,6 @@
-import { formatMinor } from '../../../shared/money';
+import { formatMinor } from '../../../shared/money-format';
 import type { PartLine } from '../../../shared/schemas/parts';
-import { SUPPORT_KIND_LABELS } from '../../../shared/schemas/sponsors';
+import { SUPPORT_KIND_LABELS } from '../../../shared/constants/sponsors';
 
 /** Support on a line as a small tag (LOOK.md "Parts table"): kind and sponsor, list price beneath. */
 export function SupportTag({ line, team = false }: { line: PartLine; team?: boolean }) {

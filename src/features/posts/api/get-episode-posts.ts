@@ -1,14 +1,14 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { ApiClient } from '../../../lib/api-client';
+import { typed, type ApiClient } from '../../../lib/api-client';
 import { useApi } from '../../../lib/api-context';
-import { episodePosts } from '../../../shared/schemas/posts';
+import type { EpisodePosts } from '../../../shared/schemas/posts';
 import { postKeys } from './keys';
 
 /** An episode's posts with replies; prime it in the episode page's loader. */
 export function episodePostsOptions(api: ApiClient, episodeId: number) {
   return queryOptions({
     queryKey: postKeys.episode(episodeId),
-    queryFn: ({ signal }) => api.get(`/api/episodes/${episodeId}/posts`, episodePosts, signal),
+    queryFn: ({ signal }) => api.get(`/api/episodes/${episodeId}/posts`, typed<EpisodePosts>(), signal),
   });
 }
 

@@ -1,6 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { z } from 'zod';
-import { noContent } from '../../../lib/api-client';
+import { noContent, typed } from '../../../lib/api-client';
 import { useApi } from '../../../lib/api-context';
 import type { PostCreate, PostStateChange } from '../../../shared/schemas/posts';
 import { postKeys } from './keys';
@@ -8,7 +7,7 @@ import { postKeys } from './keys';
 // Every change to a post can show in the episode's list, the inbox and the moderation queue (and
 // the header's counts): all post queries are marked stale, plus notifications.
 
-const created = z.object({ id: z.number().int() });
+const created = typed<{ id: number }>();
 
 function useInvalidate() {
   const queryClient = useQueryClient();

@@ -3,7 +3,7 @@ import { StateMessage } from '../../../components/ui/state-message';
 import { formatTime } from '../../../shared/chapters';
 import { momentAnchor } from '../../../shared/paths';
 import { groupByChapter, postMoment } from '../../../shared/post-anchors';
-import { POST_STATES, STATE_LABELS, type PostKind, type PostState } from '../../../shared/schemas/posts';
+import { POST_STATES, STATE_LABELS, type PostKind, type PostState } from '../../../shared/constants/posts';
 import { useEpisodePosts } from '../api/get-episode-posts';
 import { PostActions } from './post-actions';
 import { PostCard } from './post-card';

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
-import { STATE_LABELS, STATES_BY_KIND, type Post, type PostState, type Reply } from '../../../shared/schemas/posts';
+import { STATE_LABELS, STATES_BY_KIND, type PostState } from '../../../shared/constants/posts';
+import type { Post, Reply } from '../../../shared/schemas/posts';
 import { useDeletePost, useEditPost, useModeratePost, useReply, useReportPost, useSetPostState } from '../api/post-mutations';
 import { ShortTextForm } from './reason-form';
 

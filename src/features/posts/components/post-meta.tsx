@@ -1,6 +1,7 @@
 import { Plate } from '../../../components/ui/plate';
 import { formatTime } from '../../../shared/chapters';
-import { STATE_LABELS, type Post } from '../../../shared/schemas/posts';
+import { STATE_LABELS } from '../../../shared/constants/posts';
+import type { Post } from '../../../shared/schemas/posts';
 
 /** The state tag: adopted in gauge green, answered in ink, set aside in slate, open quiet. */
 export function StateTag({ state }: { state: Post['state'] }) {

@@ -1,10 +1,9 @@
 import { queryOptions } from '@tanstack/react-query';
-import { z } from 'zod';
-import type { ApiClient } from '../../../lib/api-client';
+import { typed, type ApiClient } from '../../../lib/api-client';
 import { readingKeys } from './keys';
 
-const buildAddress = z.object({ buildId: z.number().int(), path: z.string(), movedFrom: z.string().nullable() });
-const episodeAddress = z.object({ episodeId: z.number().int(), slug: z.string(), movedFrom: z.string().nullable() });
+const buildAddress = typed<{ buildId: number; path: string; movedFrom: string | null }>();
+const episodeAddress = typed<{ episodeId: number; slug: string; movedFrom: string | null }>();
 
 /** A build's id from its public address (a former slug resolves to the current one). */
 export function buildAddressOptions(api: ApiClient, handle: string, buildSlug: string) {
