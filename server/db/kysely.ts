@@ -2,7 +2,6 @@ import { Kysely, PostgresDialect } from 'kysely';
 import pg from 'pg';
 import type { Database } from './database';
 import { nameRegisteredStatements } from './prepared';
-import { gatedPool } from './request-gate';
 
 // int8 (bigint, count(*)) → number, refusing silently lossy values; numeric stays a string
 // so decimal quantities and rates are parsed deliberately, never as floats by accident.
@@ -25,9 +24,8 @@ export interface DbHandle {
 }
 
 const CONNECT_TIMEOUT_MS = 5_000;
-// A request's turn may wait behind its own earlier queries, each of which may wait for the pool:
-// the gate's timeout is the statement timeout, not the pool's connect timeout.
-const QUERY_TIMEOUT_MS = 30_000;
+/** Also how long a query waits for its request's turn (db/request-gate.ts): behind the request's own earlier queries. */
+export const QUERY_TIMEOUT_MS = 30_000;
 
 /** Opens a pool and a Kysely instance over it; connection errors are logged, never fatal. */
 export function createDb(connectionString: string, opts: { max?: number; onError?: (err: Error) => void } = {}): DbHandle {
@@ -48,6 +46,6 @@ export function createDb(connectionString: string, opts: { max?: number; onError
     client.on('error', (err) => opts.onError?.(err));
     nameRegisteredStatements(client);
   });
-  const db = new Kysely<Database>({ dialect: new PostgresDialect({ pool: gatedPool(pool, QUERY_TIMEOUT_MS) }) });
+  const db = new Kysely<Database>({ dialect: new PostgresDialect({ pool }) });
   return { db, pool, destroy: () => db.destroy() };
 }

@@ -1,5 +1,6 @@
-import { AsyncLocalStorage } from 'node:async_hooks';
+import { Kysely, PostgresDialect } from 'kysely';
 import type pg from 'pg';
+import type { Database } from './database';
 
 /**
  * One pooled connection at a time per request.
@@ -7,18 +8,19 @@ import type pg from 'pg';
  * Services read in parallel (`Promise.all` over several queries). Left alone, one episode page
  * waited for ten pooled connections at once, so the pool's queue counted queries rather than
  * requests: 200 readers overran a bound of 400 waiting (load shedding, `http/load-shed.ts`) and
- * were answered 503 although the machine had room. Inside `oneConnectionAtATime(work)` a query
- * first takes the request's gate, then a connection from the pool, and gives both back when it
- * ends, so a request waits in the pool's queue with one query at most. A request that is served
- * from a cache or waits for another request's read holds no connection at all.
+ * were answered 503 although the machine had room. A GET handler gets `requestDb(pool)` as its
+ * `deps.db` (the route registry does it): a query first takes the request's turn, then a connection
+ * from the pool, and gives both back when it ends, so a request waits in the pool's queue with one
+ * query at most. A request served from a cache, or waiting for another request's read, holds none.
  *
- * Transactions take their connection through the gate too and keep it until they end: code inside
+ * Transactions take their connection through the turn too and keep it until they end: code inside
  * a transaction must query through the transaction, never through `db` (that would wait for the
- * gate the transaction holds; it fails after the statement timeout instead of hanging).
+ * turn the transaction holds; it fails after the statement timeout instead of hanging).
+ *
+ * A Kysely of its own per request (a few microseconds) rather than AsyncLocalStorage: with it every
+ * promise in the process paid Node 20's async-context hook, about 6 % of the cached episode read.
  */
-const gates = new AsyncLocalStorage<Gate>();
-
-class Gate {
+export class Gate {
   private busy = false;
   private readonly waiting: Array<() => void> = [];
 
@@ -48,17 +50,10 @@ class Gate {
   }
 }
 
-/** Runs `work` with its database queries taking turns on one pooled connection at a time. */
-export function oneConnectionAtATime<T>(work: () => Promise<T>): Promise<T> {
-  return gates.run(new Gate(), work);
-}
-
-/** The pool as Kysely sees it: a checkout inside `oneConnectionAtATime` waits for its request's turn first. */
-export function gatedPool(pool: pg.Pool, timeoutMs: number): { connect(): Promise<pg.PoolClient>; end(): Promise<void> } {
+/** The pool as one request's Kysely sees it: a checkout waits for the request's turn first. */
+export function gatedPool(pool: pg.Pool, gate: Gate, timeoutMs: number): { connect(): Promise<pg.PoolClient>; end(): Promise<void> } {
   return {
     async connect() {
-      const gate = gates.getStore();
-      if (!gate) return pool.connect();
       await gate.acquire(timeoutMs);
       let client: pg.PoolClient;
       try {
@@ -76,6 +71,12 @@ export function gatedPool(pool: pg.Pool, timeoutMs: number): { connect(): Promis
       };
       return client;
     },
-    end: () => pool.end(),
+    // The pool is the process's; a request's Kysely never ends it.
+    end: async () => undefined,
   };
+}
+
+/** A Kysely for one request whose queries take turns on one pooled connection at a time. */
+export function requestDb(pool: pg.Pool, timeoutMs = 30_000): Kysely<Database> {
+  return new Kysely<Database>({ dialect: new PostgresDialect({ pool: gatedPool(pool, new Gate(), timeoutMs) }) });
 }

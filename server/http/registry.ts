@@ -2,7 +2,8 @@ import { Router, type Request, type Response } from 'express';
 import type { z } from 'zod';
 import type { AppDeps } from '../app-deps';
 import { authorize, type Actor, type PolicyAction, type Resource } from '../auth/policy';
-import { oneConnectionAtATime } from '../db/request-gate';
+import { QUERY_TIMEOUT_MS } from '../db/kysely';
+import { requestDb } from '../db/request-gate';
 import { HttpError } from './http-error';
 import { parse } from './parse';
 import type { RateLimitName } from './rate-limit';
@@ -95,10 +96,13 @@ export function buildApiRouter(routes: readonly RouteSpec[], deps: AppDeps): Rou
       const query = spec.query ? parse(spec.query, req.query, 'query') : undefined;
       const body = spec.body ? parse(spec.body, req.body ?? {}, 'body') : undefined;
       for (const [name, key] of spec.rateLimit?.({ req, body, actor }) ?? []) await deps.rateLimits.consume(name, key);
-      const ctx = { req, res, deps, actor, params, query, body, resource };
+      const ctx = { req, res, actor, params, query, body, resource };
       // A read's parallel queries take turns on one pooled connection (db/request-gate.ts), so the
       // pool's queue counts waiting requests and its bound (loadShed) means what it says.
-      const run = async () => (spec.method === 'get' ? oneConnectionAtATime(async () => spec.handler(ctx)) : spec.handler(ctx));
+      const run = async () =>
+        spec.method === 'get'
+          ? spec.handler({ ...ctx, deps: { ...deps, db: requestDb(deps.pool, QUERY_TIMEOUT_MS) } })
+          : spec.handler({ ...ctx, deps });
       const result =
         spec.shareWhileRunning && spec.method === 'get' ? await deps.sharedReads.run(`route:${req.originalUrl}`, run) : await run();
       if (!res.headersSent) {

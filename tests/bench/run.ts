@@ -171,14 +171,24 @@ async function main() {
     }
 
     log('aggregates against the same SQL through pg …');
-    const aggregate = async (name: string, p: string, headers: Record<string, string> = {}) => {
+    const aggregate = async (name: string, p: string, headers: Record<string, string> = {}, invalidate?: () => Promise<void>) => {
       try {
-        aggregates.push(await timeAggregate(name, base, databaseUrl, p, 15, headers));
+        aggregates.push(await timeAggregate(name, base, databaseUrl, p, 15, headers, invalidate));
       } catch (err) {
         aggregates.push({ name, ms: null, raw_sql_ms: null, ratio: null, note: `failed: ${(err as Error).message}` });
       }
     };
-    await aggregate('ledger-totals', `/api/builds/${ids.build_id}/totals`);
+    // The published totals are kept per build content revision: each timed request first moves the
+    // revision on (as any edit of the build would), so the endpoint computes them.
+    const revise = new pg.Client({ connectionString: databaseUrl });
+    await revise.connect();
+    try {
+      await aggregate('ledger-totals', `/api/builds/${ids.build_id}/totals`, {}, async () => {
+        await revise.query('update builds set content_revision = content_revision + 1 where id = $1', [ids.build_id]);
+      });
+    } finally {
+      await revise.end();
+    }
     // The summary is for the sponsor's members only: the bench reader is one (bench-env joins it).
     if (routes) await aggregate('sponsor-summary', `/api/sponsors/${LARGE.largestSponsor}/summary`, { cookie: session.cookie });
     else aggregates.push({ name: 'sponsor-summary', ms: null, raw_sql_ms: null, ratio: null, note: 'not available' });
@@ -281,6 +291,7 @@ function print(
           : {
               'endpoint ms': a.ms,
               'raw SQL ms': a.raw_sql_ms,
+              'cached ms': a.cached_ms ?? '',
               ratio: a.ratio,
               target: (a.ratio ?? 99) <= 2 ? 'met' : 'MISSED',
               'uses an index': `${a.index_use?.filter(Boolean).length} of ${a.index_use?.length}`,

@@ -1,8 +1,8 @@
-// A request's queries take turns on one pooled connection (server/db/request-gate.ts); outside a
-// request they take connections as before. Checked against a stand-in pool that counts checkouts.
+// A request's queries take turns on one pooled connection (server/db/request-gate.ts); separate
+// requests use the pool side by side. Checked against a stand-in pool that counts checkouts.
 import type pg from 'pg';
 import { describe, expect, it } from 'vitest';
-import { gatedPool, oneConnectionAtATime } from '../../server/db/request-gate';
+import { Gate, gatedPool } from '../../server/db/request-gate';
 import { SingleFlight } from '../../server/services/single-flight';
 
 function countingPool() {
@@ -32,21 +32,17 @@ async function query(p: ReturnType<typeof gatedPool>): Promise<void> {
 describe('one pooled connection at a time per request', () => {
   it('runs parallel queries of one request one after another on the pool', async () => {
     const { pool, stats } = countingPool();
-    const gated = gatedPool(pool, 1_000);
-    await oneConnectionAtATime(() => Promise.all([query(gated), query(gated), query(gated), query(gated)]));
+    const request = gatedPool(pool, new Gate(), 1_000);
+    await Promise.all([query(request), query(request), query(request), query(request)]);
     expect(stats).toEqual({ most: 1, checkouts: 4 });
   });
 
-  it('lets two requests, and code outside any request, use the pool side by side', async () => {
+  it('lets separate requests use the pool side by side', async () => {
     const { pool, stats } = countingPool();
-    const gated = gatedPool(pool, 1_000);
-    await Promise.all([
-      oneConnectionAtATime(() => Promise.all([query(gated), query(gated)])),
-      oneConnectionAtATime(() => Promise.all([query(gated), query(gated)])),
-      Promise.all([query(gated), query(gated)]),
-    ]);
+    const [a, b, c] = [1, 2, 3].map(() => gatedPool(pool, new Gate(), 1_000));
+    await Promise.all([query(a!), query(a!), query(b!), query(b!), query(c!), query(c!)]);
     expect(stats.checkouts).toBe(6);
-    expect(stats.most).toBe(4);
+    expect(stats.most).toBe(3);
   });
 
   it("gives the request's turn back when the pool refuses a connection", async () => {
@@ -60,22 +56,18 @@ describe('one pooled connection at a time per request', () => {
         return { release: () => undefined } as unknown as pg.PoolClient;
       },
     } as unknown as pg.Pool;
-    const gated = gatedPool(pool, 1_000);
-    await oneConnectionAtATime(async () => {
-      await expect(gated.connect()).rejects.toThrow(/timeout exceeded/);
-      const c = await gated.connect();
-      c.release();
-    });
+    const request = gatedPool(pool, new Gate(), 1_000);
+    await expect(request.connect()).rejects.toThrow(/timeout exceeded/);
+    const c = await request.connect();
+    c.release();
   });
 
   it('fails, instead of hanging, when a query waits for a turn its own request never gives back', async () => {
     const { pool } = countingPool();
-    const gated = gatedPool(pool, 50);
-    await oneConnectionAtATime(async () => {
-      const held = await gated.connect(); // a transaction's connection, say
-      await expect(gated.connect()).rejects.toThrow(/timeout exceeded when trying to connect/);
-      held.release();
-    });
+    const request = gatedPool(pool, new Gate(), 50);
+    const held = await request.connect(); // a transaction's connection, say
+    await expect(request.connect()).rejects.toThrow(/timeout exceeded when trying to connect/);
+    held.release();
   });
 });
 
