@@ -133,7 +133,6 @@ export function selectEpisodeReading(db: Db, episodeId: number) {
     .where('e.id', '=', episodeId);
 }
 
-
 // Built and compiled once, then run as a prepared statement (see `compiledById`).
 const reading = compiledById(selectEpisodeReading);
 

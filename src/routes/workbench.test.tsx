@@ -72,7 +72,14 @@ const fullWorkbench: Workbench = {
     },
   ],
   deleted: [
-    { kind: 'episode', id: 39, title: 'A false start', buildTitle: 'Pellham 125 two-stroke', deletedAt: '2026-11-25T10:00:00.000Z', purgeAfter: '2026-12-25T10:00:00.000Z' },
+    {
+      kind: 'episode',
+      id: 39,
+      title: 'A false start',
+      buildTitle: 'Pellham 125 two-stroke',
+      deletedAt: '2026-11-25T10:00:00.000Z',
+      purgeAfter: '2026-12-25T10:00:00.000Z',
+    },
   ],
   pendingTransfers: [{ buildId: 9, buildTitle: 'Furrow 35 tractor', fromDisplayName: 'Ida Ironside' }],
   onOrder: [

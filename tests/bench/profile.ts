@@ -88,7 +88,10 @@ async function main() {
     };
     const p = paths[which];
     if (!p) throw new Error(`unknown case ${which}; one of ${Object.keys(paths).join(', ')}`);
-    const headers = which === 'sponsor-summary' ? { cookie: (await benchSession(databaseUrl, server.baseUrl, SESSION_SECRET, ids.reader)).cookie } : undefined;
+    const headers =
+      which === 'sponsor-summary'
+        ? { cookie: (await benchSession(databaseUrl, server.baseUrl, SESSION_SECRET, ids.reader)).cookie }
+        : undefined;
     log(`${which}: ${p}, 32 connections, ${seconds} s under the profiler …`);
     const r = await load({ url: `${server.baseUrl}${p}`, connections: 32, seconds, headers });
     log(`  ${r.rps} req/s, p50 ${r.p50_ms} ms, p99 ${r.p99_ms} ms, ${r.errors} errors (slower than without the profiler)`);

@@ -33,7 +33,12 @@ export function scaleSizes(scale: number): ScaleSizes {
 }
 
 /** Where the benchmark finds its cases. */
-export const LARGE = { handle: 'bench-creator-1', buildSlug: 'bench-build-1', episodeSlug: 'the-big-teardown', largestSponsor: 'bench-sponsor-1' };
+export const LARGE = {
+  handle: 'bench-creator-1',
+  buildSlug: 'bench-build-1',
+  episodeSlug: 'the-big-teardown',
+  largestSponsor: 'bench-sponsor-1',
+};
 
 const SENTENCES = [
   'The seized caliper piston finally let go after a night soaking in penetrating oil and a gentle push from the grease gun.',
@@ -54,8 +59,20 @@ const SENTENCES = [
   'The new bushes were pressed in with a threaded rod and two sockets, since the press was out on loan.',
 ];
 const CHAPTER_TITLES = [
-  'Strip down', 'Assessment', 'Cutting out the rot', 'Fabricating the repair', 'Welding', 'Seam sealing',
-  'Primer', 'Reassembly', 'Torque-up', 'First start', 'Road test', 'What went wrong', 'Parts haul', 'Wiring',
+  'Strip down',
+  'Assessment',
+  'Cutting out the rot',
+  'Fabricating the repair',
+  'Welding',
+  'Seam sealing',
+  'Primer',
+  'Reassembly',
+  'Torque-up',
+  'First start',
+  'Road test',
+  'What went wrong',
+  'Parts haul',
+  'Wiring',
 ];
 const SYSTEMS: Array<[string, string, boolean]> = [
   ['body', 'Body and chassis', false],
@@ -66,7 +83,23 @@ const SYSTEMS: Array<[string, string, boolean]> = [
   ['fuel', 'Fuel system', true],
 ];
 const MAKES = ['Tollgate', 'Wexford Motor Co.', 'Harland', 'Bramley', 'Corran', 'Ostler', 'Fenwick & Dale', 'Marlow'];
-const PARTS = ['brake shoe set', 'wheel cylinder', 'sill panel', 'floor pan section', 'radiator hose', 'spark plug', 'fuel pump', 'track rod end', 'wiper motor', 'door seal', 'head gasket', 'clutch cable', 'drum', 'dynamo brush set', 'exhaust clamp'];
+const PARTS = [
+  'brake shoe set',
+  'wheel cylinder',
+  'sill panel',
+  'floor pan section',
+  'radiator hose',
+  'spark plug',
+  'fuel pump',
+  'track rod end',
+  'wiper motor',
+  'door seal',
+  'head gasket',
+  'clutch cable',
+  'drum',
+  'dynamo brush set',
+  'exhaust clamp',
+];
 
 const lit = (values: string[]) => `array[${values.map((v) => `'${v.replace(/'/g, "''")}'`).join(',')}]::text[]`;
 
@@ -216,7 +249,9 @@ export async function generateScaleData(databaseUrl: string, scale: number, log:
       const r = await client.query(text);
       log(`${name}: ${r.rowCount ?? 0} rows in ${((performance.now() - t0) / 1000).toFixed(1)} s`);
     }
-    await client.query(`create table if not exists bench_dataset (version int not null, scale numeric not null, created_at timestamptz not null default now())`);
+    await client.query(
+      `create table if not exists bench_dataset (version int not null, scale numeric not null, created_at timestamptz not null default now())`,
+    );
     await client.query('insert into bench_dataset (version, scale) values ($1, $2)', [DATASET_VERSION, scale]);
   } finally {
     await client.end();
@@ -228,9 +263,7 @@ export async function hasScaleData(databaseUrl: string, scale: number): Promise<
   const client = new pg.Client({ connectionString: databaseUrl });
   await client.connect();
   try {
-    const r = await client.query(
-      `select 1 from information_schema.tables where table_name = 'bench_dataset'`,
-    );
+    const r = await client.query(`select 1 from information_schema.tables where table_name = 'bench_dataset'`);
     if (!r.rowCount) return false;
     const d = await client.query('select 1 from bench_dataset where version = $1 and scale = $2', [DATASET_VERSION, scale]);
     return (d.rowCount ?? 0) > 0;

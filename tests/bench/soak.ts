@@ -62,10 +62,14 @@ async function main() {
       { method: 'GET' as const, path: '/api/builds' },
       { method: 'GET' as const, path: `/api/episodes/${row.episodes[(i + 3) % row.episodes.length]}/reading` },
     ];
-    const requests = [...reads(0), { ...write, path: `/api/episodes/${row.episodes[1]}/posts` }, ...reads(5), { ...write, path: `/api/episodes/${row.episodes[2]}/posts` }];
+    const requests = [
+      ...reads(0),
+      { ...write, path: `/api/episodes/${row.episodes[1]}/posts` },
+      ...reads(5),
+      { ...write, path: `/api/episodes/${row.episodes[2]}/posts` },
+    ];
 
-    const run = (connections: number, seconds: number) =>
-      autocannon({ url: base, connections, duration: seconds, requests, timeout: 20 });
+    const run = (connections: number, seconds: number) => autocannon({ url: base, connections, duration: seconds, requests, timeout: 20 });
 
     // The warm-up runs at the full connection count, so "after warm-up" already holds its buffers and caches.
     log(`warm-up: ${WARMUP_SECONDS} s at ${CONNECTIONS} connections …`);
@@ -107,10 +111,16 @@ async function main() {
       'req/s': { value: figures.rps, target: '' },
       'p50 / p99 ms': { value: `${figures.p50_ms} / ${figures.p99_ms}`, target: '' },
       '500s': { value: figures.errors_500, target: `0: ${ok500 ? 'met' : 'MISSED'}` },
-      '503s (load shed, Retry-After)': { value: figures.shed_503, target: `0 at ${CONNECTIONS} connections: ${figures.shed_503 === 0 ? 'met' : 'MISSED'}` },
+      '503s (load shed, Retry-After)': {
+        value: figures.shed_503,
+        target: `0 at ${CONNECTIONS} connections: ${figures.shed_503 === 0 ? 'met' : 'MISSED'}`,
+      },
       'other 4xx': { value: figures.other_4xx, target: '' },
       'socket errors / timeouts': { value: `${figures.socket_errors} / ${figures.timeouts}`, target: '' },
-      'RSS after warm-up → end (MB)': { value: `${rssAfterWarmup} → ${rssEnd} (${figures.rss_drift_pct} %)`, target: `within 20 %: ${okRss ? 'met' : 'MISSED'}` },
+      'RSS after warm-up → end (MB)': {
+        value: `${rssAfterWarmup} → ${rssEnd} (${figures.rss_drift_pct} %)`,
+        target: `within 20 %: ${okRss ? 'met' : 'MISSED'}`,
+      },
     });
     console.log('status codes:', figures.status_counts);
     mkdirSync(path.join(root, '.bench'), { recursive: true });

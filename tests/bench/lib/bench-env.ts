@@ -60,7 +60,11 @@ export interface BenchServer {
 }
 
 /** Builds the client if stale, starts the fakes, and spawns the production server over `databaseUrl`. */
-export async function startBenchServer(databaseUrl: string, env: Record<string, string> = {}, nodeArgs: string[] = []): Promise<BenchServer> {
+export async function startBenchServer(
+  databaseUrl: string,
+  env: Record<string, string> = {},
+  nodeArgs: string[] = [],
+): Promise<BenchServer> {
   ensureBuilt(root, 'dist', log);
   const dir = await mkdtemp(path.join(os.tmpdir(), 'rr-bench-'));
   const s3 = await startS3Fake({ port: 0, directory: path.join(dir, 's3'), buckets: ['rivet-reel-bench'] });

@@ -50,7 +50,10 @@ export async function load(opts: LoadOptions): Promise<LoadResult> {
 }
 
 /** The bench-mode running total of SQL queries (and the statements after `since`). */
-export async function queryLog(baseUrl: string, since?: number): Promise<{ queries: number; log: Array<{ seq: number; text: string; values: unknown[] }> }> {
+export async function queryLog(
+  baseUrl: string,
+  since?: number,
+): Promise<{ queries: number; log: Array<{ seq: number; text: string; values: unknown[] }> }> {
   const res = await fetch(`${baseUrl}/__bench/queries${since === undefined ? '' : `?since=${since}`}`);
   if (!res.ok) throw new Error(`/__bench/queries answered ${res.status}: is the server in bench mode?`);
   return (await res.json()) as { queries: number; log: Array<{ seq: number; text: string; values: unknown[] }> };
@@ -81,10 +84,18 @@ export async function queriesPerRequest(baseUrl: string, send: () => Promise<Res
  * A signed-in session for the bench: a session row for the account, its cookie signed as
  * express-session signs it (cookie-signature: HMAC-SHA256, base64 without padding), and its CSRF token.
  */
-export async function benchSession(databaseUrl: string, baseUrl: string, secret: string, userId: number): Promise<{ cookie: string; csrf: string }> {
+export async function benchSession(
+  databaseUrl: string,
+  baseUrl: string,
+  secret: string,
+  userId: number,
+): Promise<{ cookie: string; csrf: string }> {
   const sid = randomBytes(24).toString('base64url');
   const maxAge = 30 * 24 * 3600 * 1000;
-  const sess = { cookie: { originalMaxAge: maxAge, expires: new Date(Date.now() + maxAge).toISOString(), httpOnly: true, path: '/', sameSite: 'lax' }, userId };
+  const sess = {
+    cookie: { originalMaxAge: maxAge, expires: new Date(Date.now() + maxAge).toISOString(), httpOnly: true, path: '/', sameSite: 'lax' },
+    userId,
+  };
   const client = new pg.Client({ connectionString: databaseUrl });
   await client.connect();
   try {
