@@ -100,9 +100,7 @@ export function buildApiRouter(routes: readonly RouteSpec[], deps: AppDeps): Rou
       // A read's parallel queries take turns on one pooled connection (db/request-gate.ts), so the
       // pool's queue counts waiting requests and its bound (loadShed) means what it says.
       const run = async () =>
-        spec.method === 'get'
-          ? spec.handler({ ...ctx, deps: { ...deps, db: requestDb(deps.pool, QUERY_TIMEOUT_MS) } })
-          : spec.handler({ ...ctx, deps });
+        spec.method === 'get' ? spec.handler({ ...ctx, deps: withRequestDb(deps) }) : spec.handler({ ...ctx, deps });
       const result =
         spec.shareWhileRunning && spec.method === 'get' ? await deps.sharedReads.run(`route:${req.originalUrl}`, run) : await run();
       if (!res.headersSent) {
@@ -112,4 +110,14 @@ export function buildApiRouter(routes: readonly RouteSpec[], deps: AppDeps): Rou
     });
   }
   return router;
+}
+
+/** `deps` whose `db` is the request's own (db/request-gate.ts), made on first use: an answer from a cache needs none. */
+function withRequestDb(deps: AppDeps): AppDeps {
+  let db: AppDeps['db'] | undefined;
+  return Object.defineProperty({ ...deps }, 'db', {
+    get: () => (db ??= requestDb(deps.pool, QUERY_TIMEOUT_MS)),
+    enumerable: true,
+    configurable: true,
+  });
 }
