@@ -10,7 +10,7 @@ import path from 'node:path';
 import autocannon from 'autocannon';
 import pg from 'pg';
 import { benchDatabase, log, root, startBenchServer } from './lib/bench-env';
-import { benchSession } from './lib/load';
+import { benchSession, CLIENT_HEADERS } from './lib/load';
 import { LARGE } from './scale-data';
 
 const CONNECTIONS = Number(process.env.LOAD_CONNECTIONS ?? 200);
@@ -47,7 +47,7 @@ async function main() {
     const session = await benchSession(databaseUrl, base, SESSION_SECRET, row.reader);
     const write = {
       method: 'POST' as const,
-      headers: { cookie: session.cookie, 'x-csrf-token': session.csrf, 'content-type': 'application/json' },
+      headers: { ...CLIENT_HEADERS, cookie: session.cookie, 'x-csrf-token': session.csrf, 'content-type': 'application/json' },
       body: JSON.stringify({ kind: 'question', chapterStartSeconds: 0, body: 'Did the new bushes squeak once they settled in?' }),
     };
     // Nine reads to one write, cycled by every connection.
@@ -69,7 +69,9 @@ async function main() {
       { ...write, path: `/api/episodes/${row.episodes[2]}/posts` },
     ];
 
-    const run = (connections: number, seconds: number) => autocannon({ url: base, connections, duration: seconds, requests, timeout: 20 });
+    // Every request accepts gzip, as a browser's does (lib/load.ts, CLIENT_HEADERS).
+    const run = (connections: number, seconds: number) =>
+      autocannon({ url: base, connections, duration: seconds, requests, headers: { ...CLIENT_HEADERS }, timeout: 20 });
 
     // The warm-up runs at the full connection count, so "after warm-up" already holds its buffers and caches.
     log(`warm-up: ${WARMUP_SECONDS} s at ${CONNECTIONS} connections …`);

@@ -24,6 +24,13 @@ export interface LoadOptions {
   expectStatus?: number;
 }
 
+/**
+ * What every benchmark request says it accepts, as browsers and HTTP libraries do: answers the
+ * server keeps gzipped (the episode read, totals, kept pages) go out gzipped, as they would to a
+ * reader. The ceilings' small bodies are not compressed either way.
+ */
+export const CLIENT_HEADERS = { 'accept-encoding': 'gzip, deflate' } as const;
+
 /** Runs autocannon against one URL and returns its figures. */
 export async function load(opts: LoadOptions): Promise<LoadResult> {
   const result = await autocannon({
@@ -31,7 +38,7 @@ export async function load(opts: LoadOptions): Promise<LoadResult> {
     connections: opts.connections,
     duration: opts.seconds,
     method: opts.method ?? 'GET',
-    headers: opts.headers,
+    headers: { ...CLIENT_HEADERS, ...opts.headers },
     body: opts.body,
     timeout: 10,
   });
