@@ -1,9 +1,10 @@
+import { useQueryClient } from '@tanstack/react-query';
 import { useId, useRef, useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { StateMessage } from '../../../components/ui/state-message';
 import { ApiError } from '../../../lib/api-client';
 import { GALLERY_MAX, type EpisodePictures, type EpisodePicturesUpdate, type MediaItem } from '../../../shared/schemas/media';
-import { useEpisodePictures, useSetEpisodePictures } from '../api/pictures';
+import { mediaKeys, useEpisodePictures, useSetEpisodePictures } from '../api/pictures';
 import { DescribePhoto } from './describe-photo';
 import { PhotoPicker } from './photo-picker';
 import { PhotoThumb } from './photo-thumb';
@@ -26,11 +27,16 @@ export function EpisodePicturesPanel({ episodeId, buildId }: { episodeId: number
 
   // Changes made while one is being saved (several uploads finishing together) build on it, not on stale data.
   const inFlight = useRef<EpisodePicturesUpdate | null>(null);
+  const queryClient = useQueryClient();
 
   const change = (next: (current: EpisodePicturesUpdate) => EpisodePicturesUpdate) => {
-    if (!data) return;
+    // What the page holds now, read from the cache at call time: an upload's callback was made in an
+    // earlier render, whose `data` may predate a save that has settled since (two uploads finishing
+    // one after the other: the second would have been saved over the first and dropped it).
+    const latest = queryClient.getQueryData<EpisodePictures>(mediaKeys.episodePictures(episodeId)) ?? data;
+    if (!latest) return;
     setSaveError(null);
-    const body = next(inFlight.current ?? toUpdate(data));
+    const body = next(inFlight.current ?? toUpdate(latest));
     inFlight.current = body;
     save.mutate(body, {
       onSettled: () => {
