@@ -32,7 +32,9 @@ export function unstorableTextPaths(value: unknown): string[] {
 
 /** Validates one part of a request with a shared zod schema; 400 naming the fields on failure. */
 export function parse<S extends z.ZodType>(schema: S, value: unknown, part: 'body' | 'query' | 'params'): z.infer<S> {
-  const fields: Record<string, string[]> = {};
+  // No prototype: a field named like one of Object's own members (`constructor`, `toString`) is a
+  // field like any other (fuzz: `fields.constructor.push is not a function` answered 500).
+  const fields: Record<string, string[]> = Object.create(null) as Record<string, string[]>;
   for (const p of unstorableTextPaths(value)) (fields[p || part] ??= []).push(UNSTORABLE_TEXT_MESSAGE);
   if (Object.keys(fields).length === 0) {
     const result = schema.safeParse(value);
