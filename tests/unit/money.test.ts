@@ -39,6 +39,8 @@ describe('ISO 4217 minor units', () => {
       expect(displayExponent(code.toLowerCase()), code).toBe(currencyExponent(code) ?? 2);
     }
     expect(displayExponent('ZZZ')).toBe(2);
+    // Decimals: the currency-codes reference data (ISO 4217 list one). Symbols and layout: Unicode
+    // CLDR's en-GB currency pattern as Node's Intl renders it (JPY as "JP¥", KWD by its code).
     expect(formatMinor(1234, 'EUR')).toBe('€12.34');
     expect(formatMinor(1234, 'GBP')).toBe('£12.34');
     expect(formatMinor(500, 'JPY')).toBe('JP¥500');
